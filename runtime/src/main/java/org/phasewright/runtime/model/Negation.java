@@ -1,0 +1,5 @@
+package org.phasewright.runtime.model;
+
+/** Unary minus. */
+public record Negation(Expr operand) implements Expr {
+}

@@ -1,0 +1,11 @@
+/*
+ * Phasewright .phase language (Xtext).
+ */
+package org.phasewright.language.ide;
+
+
+/**
+ * Use this class to register ide components.
+ */
+public class PhaseIdeModule extends AbstractPhaseIdeModule {
+}

@@ -1,11 +1,12 @@
-/*
- * Phasewright .phase language (Xtext).
- */
 package org.phasewright.language;
 
+import org.eclipse.xtext.linking.ILinkingDiagnosticMessageProvider;
+import org.phasewright.language.linking.PhaseLinkingDiagnosticMessageProvider;
 
-/**
- * Use this class to register components to be used at runtime / without the Equinox extension registry.
- */
+/** Guice bindings of the language that hold without Eclipse. */
 public class PhaseRuntimeModule extends AbstractPhaseRuntimeModule {
+
+    public Class<? extends ILinkingDiagnosticMessageProvider> bindILinkingDiagnosticMessageProvider() {
+        return PhaseLinkingDiagnosticMessageProvider.class;
+    }
 }

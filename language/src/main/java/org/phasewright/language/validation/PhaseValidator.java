@@ -1,25 +1,10 @@
-/*
- * Phasewright .phase language (Xtext).
- */
 package org.phasewright.language.validation;
 
+import org.eclipse.xtext.validation.ComposedChecks;
 
 /**
- * This class contains custom validation rules. 
- *
- * See https://www.eclipse.org/Xtext/documentation/303_runtime_concepts.html#validation
+ * All checks of a `.phase` model. Each composed class owns one concern so that rules stay small and testable.
  */
+@ComposedChecks(validators = { NameChecks.class, StructureChecks.class, ExpressionChecks.class, StudyChecks.class })
 public class PhaseValidator extends AbstractPhaseValidator {
-	
-//	public static final String INVALID_NAME = "invalidName";
-//
-//	@Check
-//	public void checkGreetingStartsWithCapital(Greeting greeting) {
-//		if (!Character.isUpperCase(greeting.getName().charAt(0))) {
-//			warning("Name should start with a capital",
-//					PhasePackage.Literals.GREETING__NAME,
-//					INVALID_NAME);
-//		}
-//	}
-	
 }

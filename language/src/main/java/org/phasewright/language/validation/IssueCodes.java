@@ -1,0 +1,32 @@
+package org.phasewright.language.validation;
+
+/** Stable identifiers of validation issues, used by quick fixes and tests. */
+public final class IssueCodes {
+    private IssueCodes() {
+    }
+
+    private static final String PREFIX = "org.phasewright.language.";
+
+    public static final String DUPLICATE_NAME = PREFIX + "duplicateName";
+    public static final String DUPLICATE_TIME = PREFIX + "duplicateTime";
+    public static final String NO_STATES = PREFIX + "noStates";
+    public static final String MISSING_RATE = PREFIX + "missingRate";
+    public static final String DUPLICATE_RATE = PREFIX + "duplicateRate";
+    public static final String RATE_OF_NON_STATE = PREFIX + "rateOfNonState";
+    public static final String LET_CYCLE = PREFIX + "letCycle";
+    public static final String PARAM_CYCLE = PREFIX + "paramCycle";
+    public static final String UNKNOWN_FUNCTION = PREFIX + "unknownFunction";
+    public static final String WRONG_ARITY = PREFIX + "wrongArity";
+    public static final String NOT_CONSTANT = PREFIX + "notConstant";
+    public static final String OUT_OF_RANGE = PREFIX + "outOfRange";
+    public static final String EMPTY_RANGE = PREFIX + "emptyRange";
+    public static final String UNUSED_PARAM = PREFIX + "unusedParam";
+    public static final String WRONG_TIME_NAME = PREFIX + "wrongTimeName";
+    public static final String WRONG_START_SIZE = PREFIX + "wrongStartSize";
+    public static final String BAD_END_TIME = PREFIX + "badEndTime";
+    public static final String BAD_TOLERANCE = PREFIX + "badTolerance";
+    public static final String EMPTY_STUDY = PREFIX + "emptyStudy";
+    public static final String SYMMETRY_OF_NON_STATE = PREFIX + "symmetryOfNonState";
+    public static final String SYMMETRY_REPEATS_STATE = PREFIX + "symmetryRepeatsState";
+    public static final String NOT_A_NUMBER = PREFIX + "notANumber";
+}

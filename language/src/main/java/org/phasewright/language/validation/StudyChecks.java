@@ -1,0 +1,41 @@
+package org.phasewright.language.validation;
+
+import org.eclipse.xtext.EcoreUtil2;
+import org.eclipse.xtext.validation.Check;
+import org.phasewright.language.ast.PhaseModels;
+import org.phasewright.language.phase.PhaseModel;
+import org.phasewright.language.phase.SimulateRequest;
+import org.phasewright.language.phase.StudyDecl;
+
+/** Study requests name the model's time variable and give a start value for every state. */
+public class StudyChecks extends PhaseCheckBase {
+
+    @Check
+    public void simulationUsesModelTime(SimulateRequest simulate) {
+        PhaseModel model = EcoreUtil2.getContainerOfType(simulate, PhaseModel.class);
+        String time = PhaseModels.timeName(model);
+        if (simulate.getTimeName() != null && !simulate.getTimeName().equals(time)) {
+            error("The time variable of this model is '" + time + "': write `simulate to " + time + " = ...`.",
+                    simulate, PHASE.getSimulateRequest_TimeName(), IssueCodes.WRONG_TIME_NAME, time);
+        }
+        int states = PhaseModels.states(model).size();
+        int given = simulate.getStart().size();
+        if (given > 0 && given != states) {
+            error("The start point has " + ExpressionChecks.plural(given, "value") + " but the model has "
+                    + ExpressionChecks.plural(states, "state") + " (" + stateNames(model) + ").", simulate,
+                    PHASE.getSimulateRequest_Start(), IssueCodes.WRONG_START_SIZE);
+        }
+    }
+
+    @Check
+    public void studyNotEmpty(StudyDecl study) {
+        if (study.getAnalyses().isEmpty()) {
+            warning("Study '" + study.getName() + "' requests nothing; add `simulate to t = ...` or `equilibria`.",
+                    study, PHASE.getStudyDecl_Name(), IssueCodes.EMPTY_STUDY);
+        }
+    }
+
+    private static String stateNames(PhaseModel model) {
+        return String.join(", ", PhaseModels.states(model).stream().map(s -> s.getName()).toList());
+    }
+}

@@ -203,4 +203,25 @@ class PhaseValidationTest {
         single("model m\nstate x = 1\nrate x = -x\nsymmetry s: x -> -x, x -> x\n", IssueCodes.SYMMETRY_REPEATS_STATE,
                 Severity.ERROR, 4, 22);
     }
+
+    @Test
+    void paramValueOutsideItsRange() throws Exception {
+        String message = single("model m\nparam lo = 1\nparam a = 7 range lo .. 2*lo + 3\nstate x = 1\nrate x = -a*x\n",
+                IssueCodes.OUT_OF_RANGE, Severity.ERROR, 3, 11);
+        assertTrue(message.contains("outside its range 1 .. 5"), message);
+        assertTrue(withCode("model m\nparam a = 5 range 0 .. 5\nstate x = 1\nrate x = -a*x\n", IssueCodes.OUT_OF_RANGE)
+                .isEmpty(), "bounds are included");
+        single("model m\nparam a = 1 range 3 .. 2\nstate x = 1\nrate x = -a*x\n", IssueCodes.EMPTY_RANGE,
+                Severity.ERROR, 2, 19);
+    }
+
+    @Test
+    void endTimeAndToleranceMustBeSensible() throws Exception {
+        single("model m\nparam a = 1\nstate x = 1\nrate x = -a*x\nstudy s { simulate to t = a - 1 }\n",
+                IssueCodes.BAD_END_TIME, Severity.ERROR, 5, 27);
+        single("model m\nstate x = 1\nrate x = -x\nstudy s { simulate to t = 1 tolerance 2 }\n",
+                IssueCodes.BAD_TOLERANCE, Severity.ERROR, 4, 39);
+        assertTrue(issues("model m\nstate x = 1\nrate x = -x\nstudy s { simulate to t = 1 tolerance 1e-6 }\n")
+                .isEmpty());
+    }
 }

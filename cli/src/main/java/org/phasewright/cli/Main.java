@@ -26,6 +26,8 @@ public final class Main {
     }
 
     public static void main(String[] args) {
+        // Guice's bytecode generation calls sun.misc.Unsafe, which new JDKs warn about on the user's terminal.
+        System.setProperty("guice_bytecode_gen_option", "DISABLED");
         System.exit(run(Arrays.asList(args), System.out, System.err));
     }
 

@@ -1,30 +1,45 @@
-/*
- * Phasewright .phase language (Xtext).
- */
 package org.phasewright.language.generator;
 
+import java.nio.file.Path;
+import java.time.Duration;
+
+import org.eclipse.emf.common.util.URI;
 import org.eclipse.emf.ecore.resource.Resource;
 import org.eclipse.xtext.generator.AbstractGenerator;
 import org.eclipse.xtext.generator.IFileSystemAccess2;
 import org.eclipse.xtext.generator.IGeneratorContext;
+import org.phasewright.language.phase.PhaseModel;
+import org.phasewright.language.standalone.StudyPipeline;
+import org.phasewright.language.standalone.StudyPipelineException;
+import org.phasewright.runtime.study.RunSettings;
+
+import com.google.inject.Singleton;
 
 /**
- * Generates code from your model files on save.
- * 
- * See https://www.eclipse.org/Xtext/documentation/303_runtime_concepts.html#code-generation
+ * On save (Xtext builders call this only for models without errors): runs the model's studies and writes the
+ * results next to the model file, in {@code <file>.results/<study>/}. Results describe the model only.
  */
+@Singleton
 public class PhaseGenerator extends AbstractGenerator {
+    /** A save must never hang the editor: long studies are cut off and reported as incomplete. */
+    static final Duration ON_SAVE_TIME_LIMIT = Duration.ofSeconds(60);
 
-	@Override
-	public void doGenerate(Resource resource, IFileSystemAccess2 fsa, IGeneratorContext context) {
-//		Iterator<Greeting> filtered = Iterators.filter(resource.getAllContents(), Greeting.class);
-//		Iterator<String> names = Iterators.transform(filtered, new Function<Greeting, String>() {
-//
-//			@Override
-//			public String apply(Greeting greeting) {
-//				return greeting.getName();
-//			}
-//		});
-//		fsa.generateFile("greetings.txt", "People to greet: " + IteratorExtensions.join(names, ", "));
-	}
+    private static final org.apache.log4j.Logger LOG = org.apache.log4j.Logger.getLogger(PhaseGenerator.class);
+
+    @Override
+    public void doGenerate(Resource resource, IFileSystemAccess2 fsa, IGeneratorContext context) {
+        URI uri = resource.getURI();
+        if (!uri.isFile() || resource.getContents().isEmpty()
+                || !(resource.getContents().get(0) instanceof PhaseModel model) || !resource.getErrors().isEmpty()) {
+            return;
+        }
+        Path file = Path.of(uri.toFileString());
+        RunSettings settings = RunSettings.DEFAULT.withWallTimeLimit(ON_SAVE_TIME_LIMIT)
+                .withCancellation(() -> context.getCancelIndicator().isCanceled());
+        try {
+            StudyPipeline.run(model, StudyPipeline.resultsFolderFor(file), null, settings);
+        } catch (StudyPipelineException e) {
+            LOG.warn(file + ": " + e.getMessage());
+        }
+    }
 }

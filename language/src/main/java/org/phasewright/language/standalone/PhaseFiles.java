@@ -90,6 +90,8 @@ public final class PhaseFiles {
         };
         int line = issue.getLineNumber() == null ? 1 : issue.getLineNumber();
         int column = issue.getColumn() == null ? 1 : issue.getColumn();
-        return new Problem(severity, shown, line, column, issue.getMessage(), issue.getCode());
+        int offset = issue.getOffset() == null ? -1 : issue.getOffset();
+        int length = issue.getLength() == null ? 0 : issue.getLength();
+        return new Problem(severity, shown, line, column, issue.getMessage(), issue.getCode(), offset, length);
     }
 }

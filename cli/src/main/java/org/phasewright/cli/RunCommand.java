@@ -1,0 +1,61 @@
+package org.phasewright.cli;
+
+import java.io.PrintStream;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Set;
+
+import org.phasewright.language.standalone.CheckedModel;
+import org.phasewright.language.standalone.PhaseFiles;
+import org.phasewright.language.standalone.StudyPipeline;
+import org.phasewright.language.standalone.StudyPipelineException;
+import org.phasewright.language.standalone.StudyRun;
+import org.phasewright.runtime.report.TextSummary;
+import org.phasewright.runtime.study.RunSettings;
+import org.phasewright.runtime.study.Status;
+
+/** `phasewright run FILE [--study NAME] [--out DIR] [--quiet]`: check, run the studies, write results. */
+final class RunCommand {
+    private final PrintStream out;
+    private final PrintStream err;
+
+    RunCommand(PrintStream out, PrintStream err) {
+        this.out = out;
+        this.err = err;
+    }
+
+    int execute(List<String> args) throws UsageException {
+        Arguments parsed = Arguments.parse(args, Set.of("study", "out"), Set.of("quiet"));
+        if (parsed.operands().size() != 1) {
+            throw new UsageException("run needs exactly one .phase file, got " + parsed.operands().size());
+        }
+        Path file = Path.of(parsed.operands().get(0));
+        CheckedModel checked = new PhaseFiles().check(file);
+        ProblemPrinter.print(checked, err);
+        if (checked.hasErrors() || checked.ast() == null) {
+            err.println("phasewright: " + file + " has errors; nothing was run.");
+            return ExitCodes.MODEL_ERRORS;
+        }
+        Path resultsRoot = parsed.option("out") != null ? Path.of(parsed.option("out"))
+                : StudyPipeline.resultsFolderFor(file);
+        List<StudyRun> runs;
+        try {
+            runs = StudyPipeline.run(checked.ast(), resultsRoot, parsed.option("study"), RunSettings.DEFAULT);
+        } catch (StudyPipelineException e) {
+            err.println(file + ": error: " + e.getMessage());
+            return ExitCodes.MODEL_ERRORS;
+        }
+        Status worst = Status.COMPLETED;
+        for (StudyRun run : runs) {
+            if (!parsed.flag("quiet")) {
+                out.print(TextSummary.render(run.result()));
+                out.println("Results: " + run.folder());
+                out.println();
+            }
+            if (run.result().status().compareTo(worst) > 0) {
+                worst = run.result().status();
+            }
+        }
+        return worst == Status.COMPLETED ? ExitCodes.OK : ExitCodes.ANALYSIS_FAILED;
+    }
+}

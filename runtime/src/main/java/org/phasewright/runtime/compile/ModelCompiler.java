@@ -1,0 +1,88 @@
+package org.phasewright.runtime.compile;
+
+import org.codehaus.commons.compiler.CompileException;
+import org.codehaus.janino.SimpleCompiler;
+import org.phasewright.runtime.model.DynamicalModel;
+import org.phasewright.runtime.model.Expr;
+import org.phasewright.runtime.model.Variable;
+import org.phasewright.runtime.model.VariableKind;
+import org.phasewright.runtime.symbolic.InitialValues;
+import org.phasewright.runtime.symbolic.ModelChecks;
+import org.phasewright.runtime.symbolic.ModelEvaluationException;
+import org.phasewright.runtime.symbolic.ParameterValues;
+import org.phasewright.runtime.symbolic.References;
+import org.phasewright.runtime.symbolic.SymbolicJacobian;
+
+/** Turns a model into a {@link CompiledModel}: Java source for rates and exact Jacobian, compiled in memory by Janino. */
+public final class ModelCompiler {
+    private ModelCompiler() {
+    }
+
+    /**
+     * Generates and compiles the vector field. If the compiler rejects the source (for example a method above the
+     * JVM's 64 KB limit for a very large model) the interpreter is used instead and {@link CompiledModel#note()}
+     * says why.
+     *
+     * @throws ModelEvaluationException when parameters, initial values or references cannot be resolved
+     */
+    public static CompiledModel compile(DynamicalModel model) {
+        ModelChecks.check(model);
+        double[] parameters = ParameterValues.resolve(model);
+        double[] initial = InitialValues.resolve(model, parameters);
+        SymbolicJacobian jacobian = SymbolicJacobian.of(model);
+        String source = new JavaSourceGenerator(model, jacobian).generate();
+        Object instance;
+        try {
+            instance = load(source);
+        } catch (CompileException | ReflectiveOperationException | RuntimeException | LinkageError | StackOverflowError e) {
+            InterpretedVectorField interpreter = new InterpretedVectorField(model, jacobian);
+            return new CompiledModel(model, interpreter, interpreter, parameters, initial, autonomous(model),
+                    CompiledModel.Backend.INTERPRETER, "generated code could not be compiled (" + brief(e)
+                    + "); using the interpreter", null);
+        }
+        return new CompiledModel(model, (VectorField) instance, (DerivedValues) instance, parameters, initial,
+                autonomous(model), CompiledModel.Backend.GENERATED_CODE, null, source);
+    }
+
+    /** The same model evaluated by walking the expression trees; slower, used as a reference. */
+    public static CompiledModel interpret(DynamicalModel model) {
+        ModelChecks.check(model);
+        double[] parameters = ParameterValues.resolve(model);
+        double[] initial = InitialValues.resolve(model, parameters);
+        InterpretedVectorField interpreter = new InterpretedVectorField(model);
+        return new CompiledModel(model, interpreter, interpreter, parameters, initial, autonomous(model),
+                CompiledModel.Backend.INTERPRETER, null, null);
+    }
+
+    private static Object load(String source) throws CompileException, ReflectiveOperationException {
+        SimpleCompiler compiler = new SimpleCompiler();
+        compiler.setParentClassLoader(VectorField.class.getClassLoader());
+        compiler.cook(source);
+        Class<?> type = compiler.getClassLoader()
+                .loadClass(JavaSourceGenerator.PACKAGE + "." + JavaSourceGenerator.CLASS_NAME);
+        return type.getDeclaredConstructor().newInstance();
+    }
+
+    private static String brief(Throwable e) {
+        String m = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+        return m.length() > 200 ? m.substring(0, 200) + "..." : m;
+    }
+
+    /** True when no rate depends on time, directly or through derived quantities. */
+    static boolean autonomous(DynamicalModel model) {
+        boolean[] timed = new boolean[model.derived().size()];
+        for (int k = 0; k < timed.length; k++) {
+            timed[k] = usesTime(model.derived().get(k).definition(), timed);
+        }
+        return model.rates().stream().noneMatch(r -> usesTime(r, timed));
+    }
+
+    private static boolean usesTime(Expr e, boolean[] timedDerived) {
+        for (Variable v : References.of(e)) {
+            if (v.kind() == VariableKind.TIME || (v.kind() == VariableKind.DERIVED && timedDerived[v.index()])) {
+                return true;
+            }
+        }
+        return false;
+    }
+}

@@ -1,0 +1,50 @@
+package org.phasewright.runtime.equilibria;
+
+/**
+ * The local type of an equilibrium in words, and the dimensions of its stable, unstable and centre manifolds
+ * (counts of eigenvalues with negative, positive and zero real part).
+ */
+public record Classification(String type, int stableDimension, int unstableDimension, int centreDimension) {
+
+    /** True when no eigenvalue has (numerically) zero real part, so linearisation decides the local picture. */
+    public boolean hyperbolic() {
+        return centreDimension == 0;
+    }
+
+    /**
+     * Classifies from eigenvalues. A real part within {@code tolerance} of zero counts as zero, and so does an
+     * imaginary part (a double real eigenvalue is often computed as a tiny complex pair).
+     */
+    public static Classification of(double[] re, double[] im, double tolerance) {
+        int stable = 0, unstable = 0, centre = 0;
+        boolean complexStable = false, complexUnstable = false, allOscillatory = true;
+        for (int k = 0; k < re.length; k++) {
+            if (Double.isNaN(re[k]) || Double.isNaN(im[k])) {
+                return new Classification("unclassified", 0, 0, 0);
+            }
+            boolean complex = Math.abs(im[k]) > tolerance;
+            if (re[k] < -tolerance) {
+                stable++;
+                complexStable |= complex;
+            } else if (re[k] > tolerance) {
+                unstable++;
+                complexUnstable |= complex;
+            } else {
+                centre++;
+            }
+            allOscillatory &= complex && Math.abs(re[k]) <= tolerance;
+        }
+        String type;
+        if (centre > 0) {
+            type = allOscillatory && re.length > 0 ? "centre" : "non-hyperbolic";
+        } else if (unstable == 0) {
+            type = complexStable ? "stable focus" : "stable node";
+        } else if (stable == 0) {
+            type = complexUnstable ? "unstable focus" : "unstable node";
+        } else {
+            type = (complexStable || complexUnstable ? "saddle-focus" : "saddle") + " with " + unstable
+                    + (unstable == 1 ? " unstable direction" : " unstable directions");
+        }
+        return new Classification(type, stable, unstable, centre);
+    }
+}

@@ -1,0 +1,101 @@
+package org.phasewright.runtime.equilibria;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.function.BooleanSupplier;
+
+import org.phasewright.runtime.compile.VectorField;
+
+/**
+ * Finds the equilibria f(x) = 0 reachable by Newton's method from a set of starts, removes duplicates, and
+ * classifies each by the eigenvalues of the exact Jacobian. Only meaningful for autonomous models (evaluated at t = 0).
+ * Results are sorted by coordinates and named E1, E2, ...; the same model and starts give the same answer.
+ */
+public final class EquilibriumFinder {
+    private final VectorField field;
+    private final double[] parameters;
+    private final EquilibriumSettings settings;
+
+    public EquilibriumFinder(VectorField field, double[] parameters, EquilibriumSettings settings) {
+        this.field = field;
+        this.parameters = parameters.clone();
+        this.settings = settings;
+    }
+
+    /**
+     * @param deadlineNanos {@link System#nanoTime()} at which to stop, or {@link Long#MAX_VALUE}
+     */
+    public EquilibriumSearchOutcome find(StartPoints starts, long deadlineNanos, BooleanSupplier cancelled) {
+        int n = field.dimension();
+        double[] scales = starts.scales();
+        NewtonSolver newton = new NewtonSolver(field, parameters, scales, settings);
+        // Each iteration costs an n×n factorisation (~n³ operations): cap the total near 5e9 operations so a large
+        // system gets fewer iterations instead of running for hours.
+        long budget = Math.min(settings.maxTotalIterations(), Math.max(20L, (long) (5e9 / Math.pow(n + 1, 3))));
+        List<double[]> roots = new ArrayList<>();
+        List<Double> residuals = new ArrayList<>();
+        long iterations = 0;
+        int tried = 0, converged = 0;
+        EquilibriumSearchOutcome.Ending ending = EquilibriumSearchOutcome.Ending.COMPLETED;
+        for (double[] start : starts.points()) {
+            if (cancelled.getAsBoolean()) {
+                ending = EquilibriumSearchOutcome.Ending.CANCELLED;
+                break;
+            }
+            if (deadlineNanos != Long.MAX_VALUE && System.nanoTime() - deadlineNanos > 0) {
+                ending = EquilibriumSearchOutcome.Ending.TIME_LIMIT;
+                break;
+            }
+            if (iterations >= budget) {
+                ending = EquilibriumSearchOutcome.Ending.WORK_LIMIT;
+                break;
+            }
+            tried++;
+            boolean ok = newton.solve(start, (int) Math.min(settings.maxNewtonIterations(), budget - iterations));
+            iterations += newton.iterations;
+            if (ok) {
+                converged++;
+                if (roots.stream().noneMatch(r -> same(r, newton.x, scales))) {
+                    roots.add(newton.x.clone());
+                    residuals.add(newton.residual);
+                }
+            }
+        }
+        List<Integer> order = new ArrayList<>();
+        for (int i = 0; i < roots.size(); i++) {
+            order.add(i);
+        }
+        order.sort(Comparator.comparing(i -> roots.get(i), EquilibriumFinder::lexicographic));
+        List<Equilibrium> equilibria = new ArrayList<>();
+        double[] jac = new double[n * n];
+        for (int k = 0; k < order.size(); k++) {
+            double[] x = roots.get(order.get(k));
+            field.jacobian(0.0, x, parameters, jac);
+            LinearStability stability = LinearStability.of(jac, n, settings.eigenTolerance());
+            equilibria.add(new Equilibrium("E" + (k + 1), x, stability.real(), stability.imaginary(),
+                    stability.classification(), residuals.get(order.get(k))));
+        }
+        return new EquilibriumSearchOutcome(ending, equilibria, tried, converged, iterations);
+    }
+
+    private boolean same(double[] a, double[] b, double[] scales) {
+        for (int i = 0; i < a.length; i++) {
+            double s = Math.abs(a[i]) + Math.abs(b[i]) + scales[i];
+            if (Math.abs(a[i] - b[i]) > settings.duplicateTolerance() * s) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static int lexicographic(double[] a, double[] b) {
+        for (int i = 0; i < a.length; i++) {
+            int c = Double.compare(a[i] + 0.0, b[i] + 0.0); // + 0.0 turns -0.0 into 0.0
+            if (c != 0) {
+                return c;
+            }
+        }
+        return 0;
+    }
+}

@@ -1,0 +1,198 @@
+package org.phasewright.runtime.equilibria;
+
+import org.phasewright.runtime.compile.VectorField;
+
+/**
+ * Damped Newton iteration for f(x) = 0 with the exact Jacobian. Each step is halved until ||f||_2 decreases enough
+ * (Armijo backtracking); where the Jacobian is singular a Levenberg–Marquardt step is taken instead.
+ * Converged means both a small residual and a small last step. Work arrays are reused between starts.
+ */
+final class NewtonSolver {
+    private static final double ARMIJO = 1e-4;
+    private static final double MIN_DAMPING = 1.0 / 1024;
+
+    private final VectorField field;
+    private final double[] p;
+    private final int n;
+    private final double[] scales;
+    private final EquilibriumSettings settings;
+    private final double[] f, fTrial, xTrial, jac, delta, normal;
+    private final DenseLu lu;
+    final double[] x;
+    double residual;
+    int iterations;
+
+    NewtonSolver(VectorField field, double[] parameters, double[] scales, EquilibriumSettings settings) {
+        this.field = field;
+        this.p = parameters;
+        this.n = field.dimension();
+        this.scales = scales;
+        this.settings = settings;
+        x = new double[n];
+        f = new double[n];
+        fTrial = new double[n];
+        xTrial = new double[n];
+        jac = new double[n * n];
+        delta = new double[n];
+        normal = new double[n * n];
+        lu = new DenseLu(n);
+    }
+
+    /** Iterates from {@code start}; on success {@link #x} holds the root. At most {@code maxIterations} steps. */
+    boolean solve(double[] start, int maxIterations) {
+        System.arraycopy(start, 0, x, 0, n);
+        iterations = 0;
+        field.rates(0.0, x, p, f);
+        double norm = norm2(f);
+        if (!Double.isFinite(norm)) {
+            return false;
+        }
+        while (iterations < maxIterations) {
+            iterations++;
+            field.jacobian(0.0, x, p, jac);
+            if (!direction()) {
+                return false;
+            }
+            double lambda = 1.0;
+            double trialNorm;
+            while (true) {
+                for (int i = 0; i < n; i++) {
+                    xTrial[i] = x[i] + lambda * delta[i];
+                }
+                field.rates(0.0, xTrial, p, fTrial);
+                trialNorm = norm2(fTrial);
+                if (Double.isFinite(trialNorm) && trialNorm <= (1 - ARMIJO * lambda) * norm) {
+                    break;
+                }
+                lambda *= 0.5;
+                if (lambda < MIN_DAMPING) {
+                    return converged(0.0) && snap();
+                }
+            }
+            double step = 0;
+            for (int i = 0; i < n; i++) {
+                step = Math.max(step, Math.abs(lambda * delta[i]) / (Math.abs(xTrial[i]) + scales[i]));
+            }
+            System.arraycopy(xTrial, 0, x, 0, n);
+            System.arraycopy(fTrial, 0, f, 0, n);
+            norm = trialNorm;
+            if (converged(step)) {
+                return snap();
+            }
+            if (diverging()) {
+                return false;
+            }
+        }
+        return false;
+    }
+
+    /** Newton direction in {@link #delta}; Levenberg–Marquardt on (J^T J + mu I) when J is singular. */
+    private boolean direction() {
+        if (lu.factor(jac)) {
+            for (int i = 0; i < n; i++) {
+                delta[i] = -f[i];
+            }
+            lu.solve(delta);
+            return allFinite(delta);
+        }
+        double trace = 0;
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                double s = 0;
+                for (int k = 0; k < n; k++) {
+                    s += jac[k * n + i] * jac[k * n + j];
+                }
+                normal[i * n + j] = s;
+            }
+            trace += normal[i * n + i];
+        }
+        if (!(trace > 0) || !Double.isFinite(trace)) {
+            return false;
+        }
+        double mu = 1e-6 * trace / n;
+        for (int i = 0; i < n; i++) {
+            normal[i * n + i] += mu;
+            double s = 0;
+            for (int k = 0; k < n; k++) {
+                s += jac[k * n + i] * f[k];
+            }
+            delta[i] = -s;
+        }
+        if (!lu.factor(normal)) {
+            return false;
+        }
+        lu.solve(delta);
+        return allFinite(delta);
+    }
+
+    /** Residual small against what a relative perturbation of x would produce, and the last step small. */
+    private boolean converged(double step) {
+        residual = normInf(f);
+        double jNorm = 0;
+        for (int i = 0; i < n; i++) {
+            double row = 0;
+            for (int j = 0; j < n; j++) {
+                row += Math.abs(jac[i * n + j]) * (Math.abs(x[j]) + scales[j]);
+            }
+            jNorm = Math.max(jNorm, row);
+        }
+        return residual <= settings.residualTolerance() * jNorm + Double.MIN_NORMAL
+                && step <= settings.stepTolerance();
+    }
+
+    /** Rounds coordinates that are zero up to rounding noise to exactly zero, if that is no worse a root. */
+    private boolean snap() {
+        boolean changed = false;
+        System.arraycopy(x, 0, xTrial, 0, n);
+        for (int i = 0; i < n; i++) {
+            if (x[i] != 0 && Math.abs(x[i]) <= 1e-12 * scales[i]) {
+                xTrial[i] = 0;
+                changed = true;
+            }
+        }
+        if (changed) {
+            field.rates(0.0, xTrial, p, fTrial);
+            double r = normInf(fTrial);
+            if (r <= residual || r <= Double.MIN_NORMAL) {
+                System.arraycopy(xTrial, 0, x, 0, n);
+                System.arraycopy(fTrial, 0, f, 0, n);
+                residual = r;
+            }
+        }
+        return true;
+    }
+
+    private boolean diverging() {
+        for (int i = 0; i < n; i++) {
+            if (!(Math.abs(x[i]) <= 1e8 * scales[i])) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static double norm2(double[] v) {
+        double s = 0;
+        for (double a : v) {
+            s += a * a;
+        }
+        return Math.sqrt(s);
+    }
+
+    private static double normInf(double[] v) {
+        double m = 0;
+        for (double a : v) {
+            m = Math.max(m, Math.abs(a));
+        }
+        return m;
+    }
+
+    private static boolean allFinite(double[] v) {
+        for (double a : v) {
+            if (!Double.isFinite(a)) {
+                return false;
+            }
+        }
+        return true;
+    }
+}

@@ -1,0 +1,58 @@
+package org.phasewright.runtime.integrate;
+
+import java.util.Locale;
+
+/**
+ * How an integration ended, where, and what it cost.
+ *
+ * @param time  the time reached: the end time, or where the integration stopped
+ * @param state the last accepted state (at {@code time})
+ */
+public record IntegrationOutcome(Ending ending, double time, double[] state, long rhsEvaluations,
+        long acceptedSteps, long rejectedSteps, double lastStepSize, double blowUpBound) {
+
+    /** The ways an integration can end. Only COMPLETED reaches the requested end time. */
+    public enum Ending {
+        COMPLETED, BLEW_UP, STEP_SIZE_UNDERFLOW, NOT_FINITE, STEP_LIMIT, TIME_LIMIT, CANCELLED
+    }
+
+    public IntegrationOutcome {
+        state = state.clone();
+    }
+
+    @Override
+    public double[] state() {
+        return state.clone();
+    }
+
+    public boolean completed() {
+        return ending == Ending.COMPLETED;
+    }
+
+    /** One line for a person, e.g. "integration blew up at t = 3.2e-01: |u| exceeded 1e12". */
+    public String message() {
+        String at = "t = " + number(time);
+        return switch (ending) {
+            case COMPLETED -> "integrated to " + at + " in " + acceptedSteps + " steps (" + rejectedSteps
+                    + " rejected, " + rhsEvaluations + " evaluations)";
+            case BLEW_UP -> "integration blew up at " + at + ": |u| exceeded " + bound(blowUpBound);
+            case STEP_SIZE_UNDERFLOW -> "step size underflow at " + at + " (h = " + number(Math.abs(lastStepSize))
+                    + "): the solution may have a singularity there, or the system is too stiff for this method";
+            case NOT_FINITE -> "the rates became NaN or infinite at " + at;
+            case STEP_LIMIT -> "step limit reached at " + at + " after " + (acceptedSteps + rejectedSteps)
+                    + " steps";
+            case TIME_LIMIT -> "wall-time limit reached at " + at;
+            case CANCELLED -> "cancelled at " + at;
+        };
+    }
+
+    static String number(double x) {
+        return String.format(Locale.ROOT, "%.1e", x);
+    }
+
+    /** Powers of ten read best as "1e12". */
+    static String bound(double b) {
+        long e = Math.round(Math.log10(b));
+        return Math.pow(10, e) == b ? "1e" + e : String.format(Locale.ROOT, "%.3g", b);
+    }
+}

@@ -1,0 +1,52 @@
+package org.phasewright.runtime.report;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.phasewright.runtime.equilibria.Equilibrium;
+import org.phasewright.runtime.study.EquilibriumResult;
+
+/**
+ * equilibria.csv: name, coordinates (one column per state), eigenvalue k as columns lambda{k}_re and lambda{k}_im
+ * (sorted by real part, descending), type, and the stable, unstable and centre dimensions.
+ */
+public final class EquilibriaCsv {
+    private EquilibriaCsv() {
+    }
+
+    public static String render(List<String> stateNames, EquilibriumResult result) {
+        StringBuilder out = new StringBuilder();
+        List<String> header = new ArrayList<>();
+        header.add("name");
+        header.addAll(stateNames);
+        for (int k = 1; k <= stateNames.size(); k++) {
+            header.add("lambda" + k + "_re");
+            header.add("lambda" + k + "_im");
+        }
+        header.addAll(List.of("type", "stable_dim", "unstable_dim", "centre_dim"));
+        try {
+            Csv.row(out, header);
+            for (Equilibrium e : result.equilibria()) {
+                List<String> row = new ArrayList<>();
+                row.add(e.name());
+                for (double x : e.coordinates()) {
+                    row.add(Csv.number(x));
+                }
+                double[] re = e.eigenvaluesReal();
+                double[] im = e.eigenvaluesImag();
+                for (int k = 0; k < re.length; k++) {
+                    row.add(Csv.number(re[k]));
+                    row.add(Csv.number(im[k]));
+                }
+                row.add(e.type());
+                row.add(Integer.toString(e.classification().stableDimension()));
+                row.add(Integer.toString(e.classification().unstableDimension()));
+                row.add(Integer.toString(e.classification().centreDimension()));
+                Csv.row(out, row);
+            }
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+        return out.toString();
+    }
+}

@@ -1,0 +1,117 @@
+package org.phasewright.runtime.report;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.phasewright.runtime.equilibria.Equilibrium;
+import org.phasewright.runtime.integrate.IntegrationOutcome;
+import org.phasewright.runtime.study.AnalysisResult;
+import org.phasewright.runtime.study.EquilibriumResult;
+import org.phasewright.runtime.study.SimulationResult;
+import org.phasewright.runtime.study.StudyResult;
+
+/** A plain-text account of a study for a terminal: outcomes, counts, final states and a table of equilibria. */
+public final class TextSummary {
+    private TextSummary() {
+    }
+
+    public static String render(StudyResult study) {
+        StringBuilder out = new StringBuilder();
+        out.append("Model ").append(study.modelName()).append(", study ").append(study.studyName()).append('\n');
+        if (!study.parameterNames().isEmpty()) {
+            out.append("Parameters: ").append(assignments(study.parameterNames(), study.parameterValues()))
+                    .append('\n');
+        }
+        int simulation = 0, search = 0;
+        for (AnalysisResult r : study.results()) {
+            out.append('\n');
+            switch (r) {
+                case SimulationResult s -> simulation(out, study, s, ++simulation);
+                case EquilibriumResult e -> equilibria(out, study, e, ++search);
+            }
+        }
+        return out.toString();
+    }
+
+    private static void simulation(StringBuilder out, StudyResult study, SimulationResult s, int number) {
+        out.append("Simulation ").append(number).append(": ").append(s.outcome()).append(" - ").append(s.message())
+                .append('\n');
+        IntegrationOutcome o = s.integration();
+        if (o == null) {
+            return;
+        }
+        if (!o.completed()) { // the message of a completed run already gives the counts
+            out.append("  steps: ").append(o.acceptedSteps()).append(" accepted, ").append(o.rejectedSteps())
+                    .append(" rejected; ").append(o.rhsEvaluations()).append(" rate evaluations\n");
+        }
+        out.append("  state at ").append(study.timeName()).append(" = ").append(Numbers.compact(o.time()))
+                .append(": ").append(assignments(study.stateNames(), o.state())).append('\n');
+        if (s.trajectory() != null) {
+            out.append("  output: ").append(s.trajectory().size()).append(" samples\n");
+        }
+    }
+
+    private static void equilibria(StringBuilder out, StudyResult study, EquilibriumResult e, int number) {
+        out.append("Equilibria").append(number > 1 ? " " + number : "").append(": ").append(e.outcome())
+                .append(" - ").append(e.message()).append('\n');
+        if (e.equilibria().isEmpty()) {
+            return;
+        }
+        List<List<String>> rows = new ArrayList<>();
+        List<String> header = new ArrayList<>(List.of("name"));
+        header.addAll(study.stateNames());
+        header.addAll(List.of("eigenvalues", "type"));
+        rows.add(header);
+        for (Equilibrium q : e.equilibria()) {
+            List<String> row = new ArrayList<>(List.of(q.name()));
+            for (double x : q.coordinates()) {
+                row.add(Numbers.compact(x));
+            }
+            row.add(eigenvalues(q.eigenvaluesReal(), q.eigenvaluesImag()));
+            row.add(q.type());
+            rows.add(row);
+        }
+        table(out, rows);
+    }
+
+    /** Conjugate pairs (adjacent after sorting: +b then -b) are shown once as a ± bi. */
+    static String eigenvalues(double[] re, double[] im) {
+        List<String> parts = new ArrayList<>();
+        for (int k = 0; k < re.length; k++) {
+            boolean pair = k + 1 < re.length && im[k] != 0 && im[k + 1] == -im[k] && re[k + 1] == re[k];
+            parts.add(Numbers.complex(re[k], im[k], pair));
+            if (pair) {
+                k++;
+            }
+        }
+        return String.join(", ", parts);
+    }
+
+    private static String assignments(List<String> names, double[] values) {
+        List<String> parts = new ArrayList<>();
+        for (int i = 0; i < values.length; i++) {
+            parts.add(names.get(i) + " = " + Numbers.compact(values[i]));
+        }
+        return String.join(", ", parts);
+    }
+
+    private static void table(StringBuilder out, List<List<String>> rows) {
+        int columns = rows.get(0).size();
+        int[] width = new int[columns];
+        for (List<String> row : rows) {
+            for (int c = 0; c < columns; c++) {
+                width[c] = Math.max(width[c], row.get(c).length());
+            }
+        }
+        for (List<String> row : rows) {
+            StringBuilder line = new StringBuilder("  ");
+            for (int c = 0; c < columns; c++) {
+                line.append(row.get(c));
+                if (c < columns - 1) {
+                    line.append(" ".repeat(width[c] - row.get(c).length() + 2));
+                }
+            }
+            out.append(line.toString().stripTrailing()).append('\n');
+        }
+    }
+}

@@ -1,0 +1,60 @@
+package org.phasewright.runtime.study;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.phasewright.runtime.compile.CompiledModel;
+import org.phasewright.runtime.equilibria.EquilibriumFinder;
+import org.phasewright.runtime.equilibria.EquilibriumSearchOutcome;
+import org.phasewright.runtime.equilibria.StartPoints;
+import org.phasewright.runtime.integrate.DormandPrince54;
+import org.phasewright.runtime.integrate.IntegratorSettings;
+
+/** Runs one equilibrium search, seeding Newton from a trajectory of the study or from a short one of its own. */
+final class EquilibriumSearchRunner {
+    /** Steps of the exploratory trajectory when the study has none: enough to see transients, cheap for any model. */
+    static final int SHORT_RUN_STEPS = 2000;
+
+    private EquilibriumSearchRunner() {
+    }
+
+    static EquilibriumResult run(CompiledModel model, Trajectory trajectory, RunSettings settings, Budget budget) {
+        if (!model.autonomous()) {
+            return new EquilibriumResult(List.of(), null, Status.FAILED, "NOT_AUTONOMOUS",
+                    "equilibria are only defined for autonomous models, but the rates depend on time "
+                            + model.timeName());
+        }
+        double[] p = model.parameters();
+        List<double[]> points = trajectory != null ? rows(trajectory) : shortRun(model, p, settings, budget);
+        StartPoints starts = StartPoints.build(p, model.initialState(), points, settings.equilibria());
+        EquilibriumSearchOutcome search = new EquilibriumFinder(model.field(), p, settings.equilibria())
+                .find(starts, budget.deadlineNanos(), budget.cancelled());
+        Status status = search.ending() == EquilibriumSearchOutcome.Ending.COMPLETED ? Status.COMPLETED
+                : Status.INCOMPLETE;
+        return new EquilibriumResult(search.equilibria(), search, status, search.ending().name(), search.message());
+    }
+
+    private static List<double[]> rows(Trajectory trajectory) {
+        List<double[]> out = new ArrayList<>(trajectory.size());
+        for (int k = 0; k < trajectory.size(); k++) {
+            out.add(trajectory.stateRow(k));
+        }
+        return out;
+    }
+
+    /**
+     * Accepted step points of a run from the initial state with no meaningful end time (the step limit ends it),
+     * so the sample does not depend on guessing the model's time scale.
+     */
+    private static List<double[]> shortRun(CompiledModel model, double[] p, RunSettings settings, Budget budget) {
+        List<double[]> points = new ArrayList<>();
+        IntegratorSettings s = IntegratorSettings.DEFAULT.withMaxSteps(SHORT_RUN_STEPS)
+                .withTolerances(1e-6, 1e-8)
+                .withBlowUpBound(settings.blowUpBound())
+                .withDeadline(budget.deadlineNanos())
+                .withCancellation(budget.cancelled());
+        new DormandPrince54(model.field(), p).integrate(0.0, model.initialState(), 1e9, s,
+                step -> points.add(step.endState().clone()));
+        return points;
+    }
+}

@@ -1,0 +1,105 @@
+package org.phasewright.runtime.study;
+
+import java.util.Arrays;
+import java.util.List;
+import java.util.Locale;
+
+import org.phasewright.runtime.compile.CompiledModel;
+import org.phasewright.runtime.compile.DerivedValues;
+import org.phasewright.runtime.integrate.DormandPrince54;
+import org.phasewright.runtime.integrate.IntegrationOutcome;
+import org.phasewright.runtime.integrate.IntegratorSettings;
+import org.phasewright.runtime.integrate.OutputSampler;
+import org.phasewright.runtime.model.Expr;
+import org.phasewright.runtime.model.Simulation;
+import org.phasewright.runtime.symbolic.InitialValues;
+import org.phasewright.runtime.symbolic.ModelEvaluationException;
+
+/** Runs one {@link Simulation}: evaluates its settings, integrates, and samples a trajectory by dense output. */
+final class SimulationRunner {
+    static final double DEFAULT_RTOL = 1e-8;
+    /** atol = rtol / 100, which gives the default pair rtol 1e-8, atol 1e-10. */
+    static final double ATOL_PER_RTOL = 1e-2;
+
+    private SimulationRunner() {
+    }
+
+    static SimulationResult run(CompiledModel model, Simulation simulation, RunSettings settings, Budget budget) {
+        double[] p = model.parameters();
+        double endTime = Double.NaN;
+        double rtol = DEFAULT_RTOL;
+        double[] start;
+        try {
+            endTime = InitialValues.evaluate(simulation.endTime(), p, "end time");
+            if (!(endTime > 0)) {
+                throw new ModelEvaluationException("end time must be positive, got " + endTime);
+            }
+            if (simulation.tolerance() != null) {
+                rtol = InitialValues.evaluate(simulation.tolerance(), p, "tolerance");
+                if (!(rtol >= 1e-14 && rtol < 1)) {
+                    throw new ModelEvaluationException("tolerance must lie in [1e-14, 1), got " + rtol);
+                }
+            }
+            start = startVector(model, simulation.start(), p);
+        } catch (ModelEvaluationException e) {
+            return new SimulationResult(null, null, endTime, rtol, Status.FAILED, "INVALID_INPUT", e.getMessage());
+        }
+
+        IntegratorSettings integratorSettings = IntegratorSettings.DEFAULT
+                .withTolerances(rtol, rtol * ATOL_PER_RTOL)
+                .withMaxSteps(settings.maxSteps())
+                .withBlowUpBound(settings.blowUpBound())
+                .withDeadline(budget.deadlineNanos())
+                .withCancellation(budget.cancelled());
+        OutputSampler sampler = new OutputSampler(OutputSampler.evenlySpaced(0.0, endTime, settings.samples()),
+                model.dimension());
+        IntegrationOutcome outcome = new DormandPrince54(model.field(), p)
+                .integrate(0.0, start, endTime, integratorSettings, sampler);
+
+        Trajectory trajectory = trajectory(model, p, sampler, outcome);
+        Status status = switch (outcome.ending()) {
+            case COMPLETED -> Status.COMPLETED;
+            case STEP_LIMIT, TIME_LIMIT, CANCELLED -> Status.INCOMPLETE;
+            case BLEW_UP, NOT_FINITE, STEP_SIZE_UNDERFLOW -> Status.FAILED;
+        };
+        return new SimulationResult(trajectory, outcome, endTime, rtol, status, outcome.ending().name(),
+                outcome.message());
+    }
+
+    private static double[] startVector(CompiledModel model, List<Expr> start, double[] p) {
+        if (start.isEmpty()) {
+            return model.initialState();
+        }
+        if (start.size() != model.dimension()) {
+            throw new ModelEvaluationException("start lists " + start.size() + " values but the model has "
+                    + model.dimension() + " states");
+        }
+        double[] u = new double[start.size()];
+        for (int i = 0; i < u.length; i++) {
+            u[i] = InitialValues.evaluate(start.get(i), p,
+                    String.format(Locale.ROOT, "start value of '%s'", model.stateNames().get(i)));
+        }
+        return u;
+    }
+
+    /** Samples, plus the point where a failed integration stopped, with derived quantities at each row. */
+    private static Trajectory trajectory(CompiledModel model, double[] p, OutputSampler sampler,
+            IntegrationOutcome outcome) {
+        double[] times = sampler.times();
+        double[][] states = sampler.states();
+        int rows = times.length;
+        if (!outcome.completed() && (rows == 0 || outcome.time() > times[rows - 1])) {
+            times = Arrays.copyOf(times, rows + 1);
+            states = Arrays.copyOf(states, rows + 1);
+            times[rows] = outcome.time();
+            states[rows] = outcome.state();
+            rows++;
+        }
+        DerivedValues dv = model.derivedValues();
+        double[][] derived = new double[rows][dv.derivedCount()];
+        for (int k = 0; k < rows; k++) {
+            dv.derived(times[k], states[k], p, derived[k]);
+        }
+        return new Trajectory(model.timeName(), model.stateNames(), model.derivedNames(), times, states, derived);
+    }
+}

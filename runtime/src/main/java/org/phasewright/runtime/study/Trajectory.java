@@ -1,0 +1,77 @@
+package org.phasewright.runtime.study;
+
+import java.util.List;
+
+/**
+ * A sampled solution: rows of (time, states, derived quantities). Immutable; accessors copy.
+ * After a failed integration the last row is where it stopped, which may not be on the regular grid.
+ */
+public final class Trajectory {
+    private final String timeName;
+    private final List<String> stateNames;
+    private final List<String> derivedNames;
+    private final double[] times;
+    private final double[][] states;
+    private final double[][] derived;
+
+    public Trajectory(String timeName, List<String> stateNames, List<String> derivedNames, double[] times,
+            double[][] states, double[][] derived) {
+        if (states.length != times.length || derived.length != times.length) {
+            throw new IllegalArgumentException("rows of times, states and derived values differ");
+        }
+        this.timeName = timeName;
+        this.stateNames = List.copyOf(stateNames);
+        this.derivedNames = List.copyOf(derivedNames);
+        this.times = times.clone();
+        this.states = deepCopy(states);
+        this.derived = deepCopy(derived);
+    }
+
+    public String timeName() {
+        return timeName;
+    }
+
+    public List<String> stateNames() {
+        return stateNames;
+    }
+
+    public List<String> derivedNames() {
+        return derivedNames;
+    }
+
+    public int size() {
+        return times.length;
+    }
+
+    public double time(int row) {
+        return times[row];
+    }
+
+    public double state(int row, int index) {
+        return states[row][index];
+    }
+
+    public double derived(int row, int index) {
+        return derived[row][index];
+    }
+
+    public double[] times() {
+        return times.clone();
+    }
+
+    public double[] stateRow(int row) {
+        return states[row].clone();
+    }
+
+    public double[] derivedRow(int row) {
+        return derived[row].clone();
+    }
+
+    private static double[][] deepCopy(double[][] a) {
+        double[][] c = new double[a.length][];
+        for (int i = 0; i < a.length; i++) {
+            c[i] = a[i].clone();
+        }
+        return c;
+    }
+}

@@ -30,8 +30,13 @@ import com.google.inject.Injector;
 public final class PhaseFiles {
     private final Injector injector;
 
+    /** Uses one injector per process: creating it (EMF registration, Guice) costs far more than a check. */
     public PhaseFiles() {
-        this(new PhaseStandaloneSetup().createInjectorAndDoEMFRegistration());
+        this(SharedInjector.INSTANCE);
+    }
+
+    private static final class SharedInjector {
+        static final Injector INSTANCE = new PhaseStandaloneSetup().createInjectorAndDoEMFRegistration();
     }
 
     public PhaseFiles(Injector injector) {

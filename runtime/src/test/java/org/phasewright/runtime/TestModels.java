@@ -150,6 +150,7 @@ public final class TestModels {
                         add(add(call(MathFunction.ATAN, mul(x, y)), pow(add(c(2), z), a)),
                                 add(call(MathFunction.MIN, x, mul(y, z)), call(MathFunction.ABS, sub(x, c(0.1))))),
                         add(sub(call(MathFunction.SINH, mul(c(0.3), x)), call(MathFunction.COSH, mul(c(0.2), y))),
-                                mul(call(MathFunction.MAX, mul(z, u), c(0.1)), call(MathFunction.TAN, mul(c(0.4), u))))));
+                                mul(call(MathFunction.MAX, mul(z, u), c(0.1)),
+                                        call(MathFunction.TAN, mul(c(0.4), u))))));
     }
 }

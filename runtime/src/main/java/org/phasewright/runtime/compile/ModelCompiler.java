@@ -13,7 +13,7 @@ import org.phasewright.runtime.symbolic.ParameterValues;
 import org.phasewright.runtime.symbolic.References;
 import org.phasewright.runtime.symbolic.SymbolicJacobian;
 
-/** Turns a model into a {@link CompiledModel}: Java source for rates and exact Jacobian, compiled in memory by Janino. */
+/** Turns a model into a {@link CompiledModel}: Java source for rates and exact Jacobian, compiled by Janino. */
 public final class ModelCompiler {
     private ModelCompiler() {
     }
@@ -34,7 +34,8 @@ public final class ModelCompiler {
         Object instance;
         try {
             instance = load(source);
-        } catch (CompileException | ReflectiveOperationException | RuntimeException | LinkageError | StackOverflowError e) {
+        } catch (CompileException | ReflectiveOperationException | RuntimeException | LinkageError
+                | StackOverflowError e) {
             InterpretedVectorField interpreter = new InterpretedVectorField(model, jacobian);
             return new CompiledModel(model, interpreter, interpreter, parameters, initial, autonomous(model),
                     CompiledModel.Backend.INTERPRETER, "generated code could not be compiled (" + brief(e)

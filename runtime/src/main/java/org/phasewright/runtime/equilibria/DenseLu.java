@@ -12,7 +12,7 @@ final class DenseLu {
         this.pivot = new int[n];
     }
 
-    /** Factors a copy of {@code m}; false when a pivot is negligible against the largest entry (numerically singular). */
+    /** Factors a copy of {@code m}; false when a pivot is negligible against the largest entry (singular). */
     boolean factor(double[] m) {
         System.arraycopy(m, 0, lu, 0, n * n);
         double scale = 0;

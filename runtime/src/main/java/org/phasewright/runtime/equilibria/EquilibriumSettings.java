@@ -7,8 +7,8 @@ package org.phasewright.runtime.equilibria;
  * @param trajectoryStarts    points taken from the trajectory (evenly spread along it)
  * @param maxNewtonIterations per start
  * @param maxTotalIterations  over all starts; the search reports WORK_LIMIT when this runs out
- * @param residualTolerance   |f|_inf must fall below this times |J|·(|x| + scale)
- * @param stepTolerance       the last Newton step must fall below this times (|x| + scale), per coordinate
+ * @param residualTolerance   |f|_inf must fall below this times |J|·(|x| + scale/1000)
+ * @param stepTolerance       the last Newton step must fall below this times (|x| + scale/1000), per coordinate
  * @param duplicateTolerance  two solutions closer than this (scaled) are the same equilibrium
  * @param eigenTolerance      real or imaginary parts below this times |J|_F count as zero
  */

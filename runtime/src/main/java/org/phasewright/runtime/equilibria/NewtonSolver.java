@@ -15,6 +15,9 @@ final class NewtonSolver {
     private final double[] p;
     private final int n;
     private final double[] scales;
+    /** Absolute floor of the convergence tests, for coordinates near zero; a small fraction of the scale, so a
+     * wide search box cannot make a poor root look converged. */
+    private final double[] floor;
     private final EquilibriumSettings settings;
     private final double[] f, fTrial, xTrial, jac, delta, normal;
     private final DenseLu lu;
@@ -27,6 +30,10 @@ final class NewtonSolver {
         this.p = parameters;
         this.n = field.dimension();
         this.scales = scales;
+        this.floor = new double[scales.length];
+        for (int i = 0; i < scales.length; i++) {
+            floor[i] = 1e-3 * scales[i];
+        }
         this.settings = settings;
         x = new double[n];
         f = new double[n];
@@ -71,7 +78,7 @@ final class NewtonSolver {
             }
             double step = 0;
             for (int i = 0; i < n; i++) {
-                step = Math.max(step, Math.abs(lambda * delta[i]) / (Math.abs(xTrial[i]) + scales[i]));
+                step = Math.max(step, Math.abs(lambda * delta[i]) / (Math.abs(xTrial[i]) + floor[i]));
             }
             System.arraycopy(xTrial, 0, x, 0, n);
             System.arraycopy(fTrial, 0, f, 0, n);
@@ -132,7 +139,7 @@ final class NewtonSolver {
         for (int i = 0; i < n; i++) {
             double row = 0;
             for (int j = 0; j < n; j++) {
-                row += Math.abs(jac[i * n + j]) * (Math.abs(x[j]) + scales[j]);
+                row += Math.abs(jac[i * n + j]) * (Math.abs(x[j]) + floor[j]);
             }
             jNorm = Math.max(jNorm, row);
         }

@@ -9,7 +9,8 @@ import org.apache.commons.math3.random.SobolSequenceGenerator;
 /**
  * Where Newton's method starts, and the per-coordinate scales used to judge convergence and sameness.
  * Starts are the initial state, the origin, points along a trajectory, and Sobol points in two boxes: one sized by
- * the magnitudes of parameters and initial values, and the trajectory's bounding box enlarged by half on each side.
+ * the magnitudes of parameters and initial values, and the trajectory's bounding box (0.5% to 99.5% quantiles per
+ * coordinate) enlarged by half on each side.
  * The three families are interleaved so a work limit still samples all of them. Everything is deterministic.
  */
 public final class StartPoints {
@@ -53,12 +54,19 @@ public final class StartPoints {
         java.util.Arrays.fill(globalHalf, 2 * magnitude);
 
         List<double[]> finite = trajectory.stream().filter(StartPoints::allFinite).toList();
+        // Quantiles rather than min/max: a trajectory that blows up ends with a huge point that would otherwise
+        // inflate the box and, worse, the scales that decide convergence and sameness.
         double[] lo = initialState.clone();
         double[] hi = initialState.clone();
-        for (double[] u : finite) {
+        if (!finite.isEmpty()) {
+            double[] column = new double[finite.size()];
             for (int i = 0; i < n; i++) {
-                lo[i] = Math.min(lo[i], u[i]);
-                hi[i] = Math.max(hi[i], u[i]);
+                for (int k = 0; k < column.length; k++) {
+                    column[k] = finite.get(k)[i];
+                }
+                java.util.Arrays.sort(column);
+                lo[i] = Math.min(lo[i], column[(int) Math.floor(0.005 * (column.length - 1))]);
+                hi[i] = Math.max(hi[i], column[(int) Math.ceil(0.995 * (column.length - 1))]);
             }
         }
         double[] boxCentre = new double[n];

@@ -95,8 +95,8 @@ public final class DormandPrince54 {
         if (normInf(y) > s.blowUpBound()) {
             return c.outcome(IntegrationOutcome.Ending.BLEW_UP, t, y, 0, s);
         }
-        if (t0 == tEnd) {
-            return c.outcome(IntegrationOutcome.Ending.COMPLETED, t, y, 0, s);
+        if (t0 == tEnd || n == 0) { // nothing to integrate (a model without states is trivially done)
+            return c.outcome(IntegrationOutcome.Ending.COMPLETED, tEnd, y, 0, s);
         }
         double direction = Math.signum(tEnd - t0);
         double hMax = Math.min(s.maxStep(), Math.abs(tEnd - t0));

@@ -21,6 +21,9 @@ public final class OutputSampler implements StepObserver {
 
     /** Evenly spaced times t0, ..., tEnd (both included). */
     public static double[] evenlySpaced(double t0, double tEnd, int count) {
+        if (count < 2) {
+            throw new IllegalArgumentException("need at least the start and end time, got " + count + " points");
+        }
         double[] t = new double[count];
         for (int i = 0; i < count; i++) {
             t[i] = t0 + (tEnd - t0) * i / (count - 1);

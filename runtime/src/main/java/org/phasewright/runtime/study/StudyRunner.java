@@ -50,7 +50,8 @@ public final class StudyRunner {
     }
 
     private static AnalysisResult skipped(Analysis analysis, String why) {
-        String message = "not run: " + (why.equals("CANCELLED") ? "the run was cancelled" : "the wall-time limit was reached");
+        String message = "not run: "
+                + (why.equals("CANCELLED") ? "the run was cancelled" : "the wall-time limit was reached");
         return switch (analysis) {
             case Simulation s -> new SimulationResult(null, null, Double.NaN, Double.NaN, Status.INCOMPLETE, why,
                     message);

@@ -13,7 +13,7 @@ public final class Arithmetic {
     private Arithmetic() {
     }
 
-    /** The exponent as a small integer (2 ≤ |n| ≤ limit) when {@code x^exponent} should be multiplied out, else 0. */
+    /** The exponent as an integer n (2 ≤ |n| ≤ limit) when {@code x^exponent} is multiplied out, else 0. */
     public static int smallIntegerExponent(double exponent) {
         if (exponent == Math.rint(exponent) && Math.abs(exponent) >= 2 && Math.abs(exponent) <= SMALL_POWER_LIMIT) {
             return (int) exponent;

@@ -6,6 +6,7 @@ import org.phasewright.runtime.model.DerivedQuantity;
 import org.phasewright.runtime.model.DynamicalModel;
 import org.phasewright.runtime.model.Expr;
 import org.phasewright.runtime.model.Variable;
+import org.phasewright.runtime.model.VariableKind;
 
 /**
  * Structural checks the runtime relies on: every reference is in range and derived quantities only use earlier ones
@@ -36,8 +37,8 @@ public final class ModelChecks {
                 case TIME -> 1;
             };
             if (v.index() >= size) {
-                String why = v.kind() == org.phasewright.runtime.model.VariableKind.DERIVED
-                        && v.index() < model.derived().size() ? " which is not defined before it" : " which does not exist";
+                String why = v.kind() == VariableKind.DERIVED && v.index() < model.derived().size()
+                        ? " which is not defined before it" : " which does not exist";
                 throw new ModelEvaluationException(where + " refers to " + ExprEvaluator.kindWord(v) + " '" + v.name()
                         + "'" + why);
             }

@@ -18,7 +18,8 @@ public final class Substitution {
 
     /** Puts parameter values in and folds what becomes constant. */
     public static Expr parameters(Expr e, double[] values) {
-        return Simplifier.simplify(map(e, v -> v.kind() == VariableKind.PARAMETER ? new Constant(values[v.index()]) : v));
+        return Simplifier.simplify(
+                map(e, v -> v.kind() == VariableKind.PARAMETER ? new Constant(values[v.index()]) : v));
     }
 
     /** Replaces every derived quantity by its definition (recursively), leaving states, parameters and time. */

@@ -3,6 +3,12 @@ package org.phasewright.runtime.equilibria;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.phasewright.runtime.TestModels.c;
+import static org.phasewright.runtime.TestModels.model;
+import static org.phasewright.runtime.TestModels.neg;
+import static org.phasewright.runtime.TestModels.pow;
+import static org.phasewright.runtime.TestModels.state;
+import static org.phasewright.runtime.TestModels.stateVar;
 
 import java.util.List;
 
@@ -11,6 +17,7 @@ import org.phasewright.runtime.TestModels;
 import org.phasewright.runtime.compile.CompiledModel;
 import org.phasewright.runtime.compile.ModelCompiler;
 import org.phasewright.runtime.model.DynamicalModel;
+import org.phasewright.runtime.model.Expr;
 
 class EquilibriumFinderTest {
 
@@ -140,5 +147,25 @@ class EquilibriumFinderTest {
         // A tiny imaginary part (a computed double root) does not make a node a focus.
         assertEquals("stable node", Classification.of(new double[] {-1, -1}, new double[] {1e-12, -1e-12}, tol)
                 .type());
+    }
+
+    @Test
+    void nonHyperbolicAndSaddleEquilibria() {
+        // x' = -x³: the only root is 0 with f'(0) = 0, so the linearisation cannot decide (non-hyperbolic, one
+        // centre direction); Newton converges only linearly there (x -> 2x/3), which the iteration cap must allow.
+        Expr x = state(0, "x");
+        DynamicalModel flat = model("flat", List.of(stateVar("x", 1)), List.of(), List.of(),
+                List.of(neg(pow(x, c(3)))));
+        List<Equilibrium> eq = search(flat).equilibria();
+        assertEquals(1, eq.size(), () -> eq.toString());
+        assertEquals(0.0, eq.get(0).coordinates()[0], 1e-8);
+        assertEquals(new Classification("non-hyperbolic", 0, 0, 1), eq.get(0).classification());
+
+        // x' = x, y' = -y: determinant < 0, a saddle (Strogatz, Sec. 5.2).
+        Expr y = state(1, "y");
+        DynamicalModel saddle = model("saddle", List.of(stateVar("x", 1), stateVar("y", 1)), List.of(), List.of(),
+                List.of(x, neg(y)));
+        assertEquals(new Classification("saddle with 1 unstable direction", 1, 1, 0),
+                single(saddle).classification());
     }
 }

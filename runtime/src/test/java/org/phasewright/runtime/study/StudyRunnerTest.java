@@ -142,4 +142,21 @@ class StudyRunnerTest {
         StudyResult steps = StudyRunner.run(m, study("short", simulation(1e7)), RunSettings.DEFAULT.withMaxSteps(500));
         assertEquals("STEP_LIMIT", steps.results().get(0).outcome());
     }
+
+    @Test
+    void aBlownUpTrajectoryDoesNotBlurTheEquilibria() {
+        // x' = x² - 1 from x = 2 blows up (x = coth-type solution, singular near t = 0.55), yet its equilibria are
+        // -1 (f' = -2, stable) and +1 (f' = 2, unstable) (closed form); the huge last row must not make them "equal".
+        DynamicalModel m = model("riccati", List.of(stateVar("x", 2)), List.of(), List.of(),
+                List.of(TestModels.sub(mul(state(0, "x"), state(0, "x")), c(1))));
+        StudyResult r = StudyRunner.run(ModelCompiler.compile(m), study("s", simulation(2), equilibria()),
+                RunSettings.DEFAULT);
+        assertEquals("BLEW_UP", r.simulations().get(0).outcome());
+        List<org.phasewright.runtime.equilibria.Equilibrium> eq = r.equilibriumSearches().get(0).equilibria();
+        assertEquals(2, eq.size(), eq::toString);
+        assertEquals(-1.0, eq.get(0).coordinates()[0], 1e-12);
+        assertEquals("stable node", eq.get(0).type());
+        assertEquals(1.0, eq.get(1).coordinates()[0], 1e-12);
+        assertEquals("unstable node", eq.get(1).type());
+    }
 }

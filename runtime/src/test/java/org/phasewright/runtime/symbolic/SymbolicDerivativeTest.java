@@ -61,7 +61,8 @@ class SymbolicDerivativeTest {
         assertEquals(x, Simplifier.simplify(TestModels.neg(TestModels.neg(x))));
         assertEquals(new Constant(7), Simplifier.simplify(TestModels.add(c(3), mul(c(2), c(2)))));
         assertEquals(Constant.ZERO, Simplifier.simplify(TestModels.sub(x, x)));
-        assertEquals(TestModels.sub(state(1, "y"), x), Simplifier.simplify(TestModels.add(TestModels.neg(x), state(1, "y"))));
+        assertEquals(TestModels.sub(state(1, "y"), x),
+                Simplifier.simplify(TestModels.add(TestModels.neg(x), state(1, "y"))));
         // 1/0 is not folded into a constant that code generation could not print faithfully.
         assertInstanceOf(org.phasewright.runtime.model.Binary.class, Simplifier.simplify(TestModels.div(c(1), c(0))));
     }

@@ -8,6 +8,7 @@ import org.eclipse.emf.ecore.resource.Resource;
 import org.eclipse.xtext.generator.AbstractGenerator;
 import org.eclipse.xtext.generator.IFileSystemAccess2;
 import org.eclipse.xtext.generator.IGeneratorContext;
+import org.eclipse.xtext.util.CancelIndicator;
 import org.phasewright.language.phase.PhaseModel;
 import org.phasewright.language.standalone.StudyPipeline;
 import org.phasewright.language.standalone.StudyPipelineException;
@@ -34,8 +35,10 @@ public class PhaseGenerator extends AbstractGenerator {
             return;
         }
         Path file = Path.of(uri.toFileString());
+        CancelIndicator cancel = context.getCancelIndicator() == null ? CancelIndicator.NullImpl
+                : context.getCancelIndicator(); // callers outside a builder may pass a context without one
         RunSettings settings = RunSettings.DEFAULT.withWallTimeLimit(ON_SAVE_TIME_LIMIT)
-                .withCancellation(() -> context.getCancelIndicator().isCanceled());
+                .withCancellation(cancel::isCanceled);
         try {
             StudyPipeline.run(model, StudyPipeline.resultsFolderFor(file), null, settings);
         } catch (StudyPipelineException e) {

@@ -4,6 +4,8 @@ import java.io.PrintStream;
 import java.util.Arrays;
 import java.util.List;
 
+import org.phasewright.language.ide.server.PhaseLanguageServerLauncher;
+
 /** Entry point of the `phasewright` command. Never shows a stack trace to the user. */
 public final class Main {
     static final String VERSION = "0.1.0";
@@ -16,6 +18,7 @@ public final class Main {
               run FILE [--study NAME] [--out DIR] [--quiet]
                                                  run the studies of a model and write their results
                                                  (default DIR: FILE's folder/<model file name>.results)
+              lsp                                serve editors: language server on stdin/stdout (JSON-RPC)
               help                               show this text
               version                            show the version
 
@@ -43,6 +46,11 @@ public final class Main {
             return switch (command) {
                 case "check" -> new CheckCommand(out).execute(rest);
                 case "run" -> new RunCommand(out, err).execute(rest);
+                case "lsp" -> {
+                    // Blocks until the client disconnects; stdout then carries only protocol messages.
+                    PhaseLanguageServerLauncher.main(rest.toArray(String[]::new));
+                    yield ExitCodes.OK;
+                }
                 case "help", "--help", "-h" -> {
                     out.print(USAGE);
                     yield ExitCodes.OK;

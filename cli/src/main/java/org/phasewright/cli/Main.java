@@ -15,9 +15,11 @@ public final class Main {
 
             Commands:
               check FILE...                      parse and validate; print file:line:column: problems
-              run FILE [--study NAME] [--out DIR] [--quiet]
+              run FILE [--study NAME] [--out DIR] [--axes A,B] [--quiet]
                                                  run the studies of a model and write their results
                                                  (default DIR: FILE's folder/<model file name>.results)
+                                                 and an HTML report per study in DIR/<study>/report/;
+                                                 --axes names the states of the phase plots ("x,z;y,z")
               lsp                                serve editors: language server on stdin/stdout (JSON-RPC)
               help                               show this text
               version                            show the version

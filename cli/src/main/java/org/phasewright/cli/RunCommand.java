@@ -25,7 +25,7 @@ final class RunCommand {
     }
 
     int execute(List<String> args) throws UsageException {
-        Arguments parsed = Arguments.parse(args, Set.of("study", "out"), Set.of("quiet"));
+        Arguments parsed = Arguments.parse(args, Set.of("study", "out", "axes"), Set.of("quiet"));
         if (parsed.operands().size() != 1) {
             throw new UsageException("run needs exactly one .phase file, got " + parsed.operands().size());
         }
@@ -38,23 +38,36 @@ final class RunCommand {
         }
         Path resultsRoot = parsed.option("out") != null ? Path.of(parsed.option("out"))
                 : StudyPipeline.resultsFolderFor(file);
+        ReportStep reports = ReportStep.prepare(file, checked.ast(), parsed.option("axes"));
         List<StudyRun> runs;
         try {
-            runs = StudyPipeline.run(checked.ast(), resultsRoot, parsed.option("study"), RunSettings.DEFAULT);
+            runs = reports.run(checked.ast(), resultsRoot, parsed.option("study"), RunSettings.DEFAULT);
         } catch (StudyPipelineException e) {
             err.println(file + ": error: " + e.getMessage());
             return ExitCodes.MODEL_ERRORS;
         }
         Status worst = Status.COMPLETED;
+        boolean reportFailed = false;
         for (StudyRun run : runs) {
+            Path report = reports.write(run, err);
+            reportFailed |= report == null;
             if (!parsed.flag("quiet")) {
                 out.print(TextSummary.render(run.result()));
                 out.println("Results: " + run.folder());
+                if (report != null) {
+                    out.println("Report: " + report);
+                }
                 out.println();
             }
             if (run.result().status().compareTo(worst) > 0) {
                 worst = run.result().status();
             }
+        }
+        if (!parsed.flag("quiet")) {
+            out.println(TextSummary.CAUTION);
+        }
+        if (reportFailed) {
+            return ExitCodes.MODEL_ERRORS;
         }
         return worst == Status.COMPLETED ? ExitCodes.OK : ExitCodes.ANALYSIS_FAILED;
     }

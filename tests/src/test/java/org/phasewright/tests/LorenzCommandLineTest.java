@@ -58,6 +58,7 @@ class LorenzCommandLineTest {
         assertTrue(run.out().contains("saddle-focus with 2 unstable directions"), run.out());
         assertTrue(Files.isRegularFile(results.resolve("reference/trajectory.csv")));
         assertTrue(Files.isRegularFile(results.resolve("reference/equilibria.csv")));
+        assertTrue(run.out().contains("describe the model, not the equipment"), "the usual caution is printed");
     }
 
     @Test

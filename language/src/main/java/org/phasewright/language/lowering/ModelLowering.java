@@ -12,6 +12,8 @@ import org.phasewright.language.phase.Analysis;
 import org.phasewright.language.phase.EquilibriaRequest;
 import org.phasewright.language.phase.Expression;
 import org.phasewright.language.phase.LetDecl;
+import org.phasewright.language.phase.LyapunovRequest;
+import org.phasewright.language.phase.SectionRequest;
 import org.phasewright.language.phase.ParamDecl;
 import org.phasewright.language.phase.PhaseModel;
 import org.phasewright.language.phase.RateDecl;
@@ -23,14 +25,21 @@ import org.phasewright.language.phase.Symbol;
 import org.phasewright.language.phase.SymmetryDecl;
 import org.phasewright.language.phase.TimeDecl;
 import org.phasewright.language.phase.UnitExpr;
+import org.phasewright.runtime.model.Binary;
+import org.phasewright.runtime.model.BinaryOperator;
+import org.phasewright.runtime.model.Constant;
 import org.phasewright.runtime.model.DerivedQuantity;
 import org.phasewright.runtime.model.DynamicalModel;
 import org.phasewright.runtime.model.EquilibriumSearch;
 import org.phasewright.runtime.model.Expr;
+import org.phasewright.runtime.model.IntegrationMethod;
+import org.phasewright.runtime.model.LyapunovExponents;
 import org.phasewright.runtime.model.Parameter;
 import org.phasewright.runtime.model.ParameterRange;
+import org.phasewright.runtime.model.Section;
 import org.phasewright.runtime.model.Simulation;
 import org.phasewright.runtime.model.StateVariable;
+import org.phasewright.runtime.model.StopCondition;
 import org.phasewright.runtime.model.Study;
 import org.phasewright.runtime.model.Symmetry;
 import org.phasewright.runtime.model.TimeAxis;
@@ -145,14 +154,54 @@ public final class ModelLowering {
                         start.add(expressions.lower(component));
                     }
                     Expr tolerance = simulate.getTolerance() == null ? null : expressions.lower(simulate.getTolerance());
-                    analyses.add(new Simulation(expressions.lower(simulate.getEnd()), start, tolerance));
+                    analyses.add(new Simulation(expressions.lower(simulate.getEnd()), start, tolerance,
+                            method(simulate.getMethod()), stop(simulate, expressions)));
                 } else if (analysis instanceof EquilibriaRequest) {
                     analyses.add(new EquilibriumSearch());
+                } else if (analysis instanceof SectionRequest section) {
+                    analyses.add(section(section, expressions));
+                } else if (analysis instanceof LyapunovRequest lyapunov) {
+                    analyses.add(new LyapunovExponents(expressions.lower(lyapunov.getEnd()),
+                            lyapunov.getTolerance() == null ? null : expressions.lower(lyapunov.getTolerance())));
                 }
             }
             studies.add(new Study(decl.getName(), analyses));
         }
         return studies;
+    }
+
+    /** The surface is written as `left = right`; the runtime looks for zeros of left - right. */
+    private static Section section(SectionRequest request, ExpressionLowering expressions) {
+        Expr surface = surface(request.getSurface(), request.getLevel(), expressions);
+        Section.Crossing direction = request.isRising() ? Section.Crossing.RISING
+                : request.isFalling() ? Section.Crossing.FALLING : Section.Crossing.BOTH;
+        return new Section(surface, direction, expressions.lower(request.getEnd()),
+                request.getTolerance() == null ? null : expressions.lower(request.getTolerance()),
+                method(request.getMethod()));
+    }
+
+    /** `until LEFT = RIGHT [rising|falling]`, or null. */
+    private static StopCondition stop(SimulateRequest simulate, ExpressionLowering expressions) {
+        if (simulate.getStopSurface() == null) {
+            return null;
+        }
+        return new StopCondition(surface(simulate.getStopSurface(), simulate.getStopLevel(), expressions),
+                simulate.isStopRising() ? Section.Crossing.RISING
+                        : simulate.isStopFalling() ? Section.Crossing.FALLING : Section.Crossing.BOTH);
+    }
+
+    private static Expr surface(Expression leftSide, Expression rightSide, ExpressionLowering expressions) {
+        Expr left = expressions.lower(leftSide);
+        Expr right = expressions.lower(rightSide);
+        return right instanceof Constant c && c.value() == 0 ? left : new Binary(BinaryOperator.SUBTRACT, left, right);
+    }
+
+    private static IntegrationMethod method(org.phasewright.language.phase.IntegrationMethod method) {
+        return switch (method) {
+            case HIGH_ORDER -> IntegrationMethod.HIGH_ORDER;
+            case STIFF -> IntegrationMethod.STIFF;
+            default -> IntegrationMethod.EXPLICIT;
+        };
     }
 
     /** The unit as written, with white space normalised, or null. Checking units is the units validator's job. */

@@ -14,6 +14,7 @@ import org.phasewright.language.phase.Expression;
 import org.phasewright.language.phase.FunctionCall;
 import org.phasewright.language.phase.ParamDecl;
 import org.phasewright.language.phase.PhaseModel;
+import org.phasewright.language.phase.LyapunovRequest;
 import org.phasewright.language.phase.SimulateRequest;
 import org.phasewright.language.phase.StateDecl;
 import org.phasewright.language.phase.StateMap;
@@ -54,10 +55,15 @@ public class ExpressionChecks extends PhaseCheckBase {
             return;
         }
         EObject owner = ref;
+        EObject top = ref;
         while (owner instanceof Expression) {
+            top = owner;
             owner = owner.eContainer();
         }
-        String place = constantPlace(owner);
+        // The stop condition of a simulation is evaluated along the trajectory, so it may use states and lets.
+        boolean stopCondition = top.eContainingFeature() == PHASE.getSimulateRequest_StopSurface()
+                || top.eContainingFeature() == PHASE.getSimulateRequest_StopLevel();
+        String place = stopCondition ? null : constantPlace(owner);
         if (place != null && !(symbol instanceof ParamDecl)) {
             error(place + " may use only params; '" + symbol.getName() + "' is a " + PhaseModels.kindWord(symbol)
                     + ".", ref, PHASE.getSymbolRef_Symbol(), IssueCodes.NOT_CONSTANT);
@@ -76,6 +82,9 @@ public class ExpressionChecks extends PhaseCheckBase {
         }
         if (owner instanceof SimulateRequest) {
             return "A simulation setting";
+        }
+        if (owner instanceof LyapunovRequest) {
+            return "A Lyapunov setting";
         }
         return null;
     }

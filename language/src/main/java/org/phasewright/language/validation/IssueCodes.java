@@ -29,4 +29,19 @@ public final class IssueCodes {
     public static final String SYMMETRY_OF_NON_STATE = PREFIX + "symmetryOfNonState";
     public static final String SYMMETRY_REPEATS_STATE = PREFIX + "symmetryRepeatsState";
     public static final String NOT_A_NUMBER = PREFIX + "notANumber";
+    // Units and dimensions (UnitChecks).
+    public static final String UNKNOWN_UNIT = PREFIX + "unknownUnit";
+    public static final String UNLIKE_DIMENSIONS = PREFIX + "unlikeDimensions";
+    public static final String DIMENSIONED_ARGUMENT = PREFIX + "dimensionedArgument";
+    public static final String BAD_EXPONENT = PREFIX + "badExponent";
+    public static final String WRONG_RATE_DIMENSION = PREFIX + "wrongRateDimension";
+    public static final String WRONG_VALUE_DIMENSION = PREFIX + "wrongValueDimension";
+    public static final String WRONG_RANGE_DIMENSION = PREFIX + "wrongRangeDimension";
+    // Symmetries (SymmetryChecks). SYMMETRY_DISCOVERED carries the declaration text to insert as issue data.
+    public static final String NONLINEAR_SYMMETRY = PREFIX + "nonlinearSymmetry";
+    public static final String SINGULAR_SYMMETRY = PREFIX + "singularSymmetry";
+    public static final String BROKEN_SYMMETRY = PREFIX + "brokenSymmetry";
+    public static final String SYMMETRY_VERIFIED = PREFIX + "symmetryVerified";
+    public static final String SYMMETRY_UNVERIFIED = PREFIX + "symmetryUnverified";
+    public static final String SYMMETRY_DISCOVERED = PREFIX + "symmetryDiscovered";
 }

@@ -1,9 +1,13 @@
 package org.phasewright.language.validation;
 
+import org.eclipse.emf.ecore.EObject;
+import org.eclipse.emf.ecore.EStructuralFeature;
 import org.eclipse.xtext.EcoreUtil2;
 import org.eclipse.xtext.validation.Check;
 import org.phasewright.language.ast.PhaseModels;
+import org.phasewright.language.phase.LyapunovRequest;
 import org.phasewright.language.phase.PhaseModel;
+import org.phasewright.language.phase.SectionRequest;
 import org.phasewright.language.phase.SimulateRequest;
 import org.phasewright.language.phase.StudyDecl;
 
@@ -24,6 +28,24 @@ public class StudyChecks extends PhaseCheckBase {
             error("The start point has " + ExpressionChecks.plural(given, "value") + " but the model has "
                     + ExpressionChecks.plural(states, "state") + " (" + stateNames(model) + ").", simulate,
                     PHASE.getSimulateRequest_Start(), IssueCodes.WRONG_START_SIZE);
+        }
+    }
+
+    @Check
+    public void sectionUsesModelTime(SectionRequest section) {
+        timeName(section, section.getTimeName(), PHASE.getSectionRequest_TimeName(), "section where ... to ");
+    }
+
+    @Check
+    public void lyapunovUsesModelTime(LyapunovRequest lyapunov) {
+        timeName(lyapunov, lyapunov.getTimeName(), PHASE.getLyapunovRequest_TimeName(), "lyapunov to ");
+    }
+
+    private void timeName(EObject request, String written, EStructuralFeature feature, String form) {
+        String time = PhaseModels.timeName(EcoreUtil2.getContainerOfType(request, PhaseModel.class));
+        if (written != null && !written.equals(time)) {
+            error("The time variable of this model is '" + time + "': write `" + form + time + " = ...`.", request,
+                    feature, IssueCodes.WRONG_TIME_NAME, time);
         }
     }
 

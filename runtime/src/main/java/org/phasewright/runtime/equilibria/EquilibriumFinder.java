@@ -13,6 +13,9 @@ import org.phasewright.runtime.compile.VectorField;
  * Results are sorted by coordinates and named E1, E2, ...; the same model and starts give the same answer.
  */
 public final class EquilibriumFinder {
+    /** Starts re-run with deflation after the plain pass. */
+    static final int DEFLATION_RESTARTS = 20;
+
     private final VectorField field;
     private final double[] parameters;
     private final EquilibriumSettings settings;
@@ -61,6 +64,30 @@ public final class EquilibriumFinder {
                     residuals.add(newton.residual);
                 }
             }
+        }
+        // Deflation pass: restart from the first starts with every root found so far deflated, so Newton is pushed
+        // to roots the plain pass missed (the found roots cannot attract it any more).
+        if (ending == EquilibriumSearchOutcome.Ending.COMPLETED && !roots.isEmpty()) {
+            List<double[]> known = new ArrayList<>(roots);
+            newton.deflate(known);
+            int restarts = Math.min(DEFLATION_RESTARTS, starts.points().size());
+            for (int k = 0; k < restarts && iterations < budget; k++) {
+                if (cancelled.getAsBoolean()
+                        || (deadlineNanos != Long.MAX_VALUE && System.nanoTime() - deadlineNanos > 0)) {
+                    break;
+                }
+                tried++;
+                boolean ok = newton.solve(starts.points().get(k),
+                        (int) Math.min(settings.maxNewtonIterations(), budget - iterations));
+                iterations += newton.iterations;
+                if (ok && roots.stream().noneMatch(r -> same(r, newton.x, scales))) {
+                    converged++;
+                    roots.add(newton.x.clone());
+                    residuals.add(newton.residual);
+                    known.add(newton.x.clone());
+                }
+            }
+            newton.deflate(List.of());
         }
         List<Integer> order = new ArrayList<>();
         for (int i = 0; i < roots.size(); i++) {

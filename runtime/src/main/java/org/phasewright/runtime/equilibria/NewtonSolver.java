@@ -6,6 +6,11 @@ import org.phasewright.runtime.compile.VectorField;
  * Damped Newton iteration for f(x) = 0 with the exact Jacobian. Each step is halved until ||f||_2 decreases enough
  * (Armijo backtracking); where the Jacobian is singular a Levenberg–Marquardt step is taken instead.
  * Converged means both a small residual and a small last step. Work arrays are reused between starts.
+ * <p>
+ * With {@link #deflate} roots, the iteration solves m(x)·f(x) = 0 instead, m(x) = Π_k (1/‖(x − r_k)/scale‖² + 1):
+ * the deflation of Farrell, Birkisson &amp; Funke (SIAM J. Sci. Comput. 37, 2015), which makes known roots repel
+ * the iteration so that it converges to a new one. The deflated Newton step is the plain one times
+ * 1/(1 − ∇m·δ/m) (their Sherman–Morrison form), and the line search measures m(x)·‖f(x)‖.
  */
 final class NewtonSolver {
     private static final double ARMIJO = 1e-4;
@@ -24,6 +29,13 @@ final class NewtonSolver {
     final double[] x;
     double residual;
     int iterations;
+    /** Roots to deflate (scaled distances); empty for plain Newton. */
+    private java.util.List<double[]> deflated = java.util.List.of();
+
+    /** Known roots that the next {@link #solve} calls must avoid (no copy is made: do not change them). */
+    void deflate(java.util.List<double[]> roots) {
+        deflated = roots;
+    }
 
     NewtonSolver(VectorField field, double[] parameters, double[] scales, EquilibriumSettings settings) {
         this.field = field;
@@ -50,7 +62,7 @@ final class NewtonSolver {
         System.arraycopy(start, 0, x, 0, n);
         iterations = 0;
         field.rates(0.0, x, p, f);
-        double norm = norm2(f);
+        double norm = deflation(x) * norm2(f);
         if (!Double.isFinite(norm)) {
             return false;
         }
@@ -60,6 +72,9 @@ final class NewtonSolver {
             if (!direction()) {
                 return false;
             }
+            if (!deflated.isEmpty() && !deflateStep()) {
+                return false;
+            }
             double lambda = 1.0;
             double trialNorm;
             while (true) {
@@ -67,7 +82,7 @@ final class NewtonSolver {
                     xTrial[i] = x[i] + lambda * delta[i];
                 }
                 field.rates(0.0, xTrial, p, fTrial);
-                trialNorm = norm2(fTrial);
+                trialNorm = deflation(xTrial) * norm2(fTrial);
                 if (Double.isFinite(trialNorm) && trialNorm <= (1 - ARMIJO * lambda) * norm) {
                     break;
                 }
@@ -91,6 +106,43 @@ final class NewtonSolver {
             }
         }
         return false;
+    }
+
+    /** m(x) = Π_k (1/d_k² + 1) with d_k the scaled distance to the k-th deflated root; 1 without deflation. */
+    private double deflation(double[] at) {
+        double m = 1;
+        for (double[] r : deflated) {
+            double d2 = 0;
+            for (int i = 0; i < n; i++) {
+                double d = (at[i] - r[i]) / scales[i];
+                d2 += d * d;
+            }
+            m *= 1 / d2 + 1;
+        }
+        return m;
+    }
+
+    /** Turns the plain Newton step into the step for m·f: δ ← δ / (1 − ∇m·δ / m). */
+    private boolean deflateStep() {
+        double slope = 0; // ∇(log m)·δ = Σ_k (∇m_k·δ)/m_k
+        for (double[] r : deflated) {
+            double d2 = 0, dot = 0;
+            for (int i = 0; i < n; i++) {
+                double d = (x[i] - r[i]) / scales[i];
+                d2 += d * d;
+                dot += d * delta[i] / scales[i];
+            }
+            double mk = 1 / d2 + 1;
+            slope += (-2 / (d2 * d2)) * dot / mk;
+        }
+        double tau = 1 / (1 - slope);
+        if (!Double.isFinite(tau)) {
+            return false;
+        }
+        for (int i = 0; i < n; i++) {
+            delta[i] *= tau;
+        }
+        return true;
     }
 
     /** Newton direction in {@link #delta}; Levenberg–Marquardt on (J^T J + mu I) when J is singular. */

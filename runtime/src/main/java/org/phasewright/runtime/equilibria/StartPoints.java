@@ -28,6 +28,14 @@ public final class StartPoints {
         return points;
     }
 
+    /** The same starts and scales with {@code first} tried before all others (e.g. roots found by homotopy). */
+    public StartPoints withLeading(List<double[]> first) {
+        List<double[]> all = new ArrayList<>(first.size() + points.size());
+        first.forEach(x -> all.add(x.clone()));
+        all.addAll(points);
+        return new StartPoints(all, scales);
+    }
+
     /** Typical magnitude of each coordinate (positive). */
     public double[] scales() {
         return scales.clone();

@@ -9,8 +9,12 @@ import org.phasewright.runtime.compile.VectorField;
  * of Section II.4, and the 4th-order continuous extension (dense output) of Section II.6.
  * <p>
  * An instance owns its work arrays, so the step loop allocates nothing; it is not thread-safe but can be reused.
+ * <p>
+ * Stiffness detection follows DOPRI5 (HNW I, Section II.10 and IV.2): stages 6 and 7 are both evaluated at t+h, so
+ * |h|·‖k7−k6‖/‖y7−y6‖ estimates |h·λ| for the dominant eigenvalue; when it stays beyond the method's stability
+ * boundary (3.25) for 15 tested steps the outcome reports the time.
  */
-public final class DormandPrince54 {
+public final class DormandPrince54 implements Integrator {
     // Butcher tableau, HNW Table 5.2.
     private static final double C2 = 1.0 / 5, C3 = 3.0 / 10, C4 = 4.0 / 5, C5 = 8.0 / 9;
     private static final double A21 = 1.0 / 5;
@@ -34,6 +38,9 @@ public final class DormandPrince54 {
     private static final double SAFETY = 0.9, FAC_MIN = 0.2, FAC_MAX = 10.0, BETA = 0.04;
     private static final double EXPO = 0.2 - BETA * 0.75;
     private static final double UROUND = 2.3e-16;
+    // Stiffness test of DOPRI5: boundary of the stability region along the negative axis, and how often to test.
+    private static final double STIFF_BOUNDARY = 3.25;
+    private static final int STIFF_TEST_EVERY = 1000, STIFF_CONFIRMATIONS = 15, NONSTIFF_RESET = 6;
 
     private final VectorField field;
     private final double[] p;
@@ -70,6 +77,7 @@ public final class DormandPrince54 {
      *
      * @param observer receives every accepted step, or null
      */
+    @Override
     public IntegrationOutcome integrate(double t0, double[] u0, double tEnd, IntegratorSettings s,
             StepObserver observer) {
         if (u0.length != n) {
@@ -98,17 +106,18 @@ public final class DormandPrince54 {
         if (t0 == tEnd || n == 0) { // nothing to integrate (a model without states is trivially done)
             return c.outcome(IntegrationOutcome.Ending.COMPLETED, tEnd, y, 0, s);
         }
+        double[] rtol = s.relativeTolerances(n);
+        double[] atol = s.absoluteTolerances(n);
         double direction = Math.signum(tEnd - t0);
         double hMax = Math.min(s.maxStep(), Math.abs(tEnd - t0));
         double h = direction * (s.initialStep() > 0 ? Math.min(s.initialStep(), hMax) : initialStep(t, hMax,
-                direction, s, c));
+                direction, rtol, atol, c));
         double timeScale = Math.max(Math.abs(t0), Math.abs(tEnd));
         double facOld = 1e-4;
         boolean rejectedLast = false;
         boolean nonFiniteLast = false;
         long attempts = 0;
-        double rtol = s.relativeTolerance();
-        double atol = s.absoluteTolerance();
+        int stiffCount = 0, nonStiffCount = 0;
 
         while (true) {
             if (attempts >= s.maxSteps()) {
@@ -160,7 +169,7 @@ public final class DormandPrince54 {
 
             double err = 0;
             for (int i = 0; i < n; i++) {
-                double sk = atol + rtol * Math.max(Math.abs(y[i]), Math.abs(yNew[i]));
+                double sk = atol[i] + rtol[i] * Math.max(Math.abs(y[i]), Math.abs(yNew[i]));
                 double e = h * (E1 * k1[i] + E3 * k3[i] + E4 * k4[i] + E5 * k5[i] + E6 * k6[i] + E7 * k7[i]) / sk;
                 err += e * e;
             }
@@ -182,6 +191,22 @@ public final class DormandPrince54 {
             if (err <= 1.0) {
                 facOld = Math.max(err, 1e-4);
                 c.accepted++;
+                if (Double.isNaN(c.stiffAt) && (c.accepted % STIFF_TEST_EVERY == 0 || stiffCount > 0)) {
+                    double num = 0, den = 0;
+                    for (int i = 0; i < n; i++) {
+                        double dk = k7[i] - k6[i], dy = yNew[i] - yStage[i];
+                        num += dk * dk;
+                        den += dy * dy;
+                    }
+                    if (den > 0 && Math.abs(h) * Math.sqrt(num / den) > STIFF_BOUNDARY) {
+                        nonStiffCount = 0;
+                        if (++stiffCount == STIFF_CONFIRMATIONS) {
+                            c.stiffAt = tNew;
+                        }
+                    } else if (++nonStiffCount == NONSTIFF_RESET) {
+                        stiffCount = 0;
+                    }
+                }
                 if (observer != null) {
                     prepareDense(h);
                 }
@@ -196,6 +221,9 @@ public final class DormandPrince54 {
                 if (observer != null) {
                     dense.set(tOld, t, h);
                     observer.step(dense);
+                    if (observer.stopRequested()) {
+                        return c.outcome(IntegrationOutcome.Ending.STOPPED, t, y, h, s);
+                    }
                 }
                 if (normInf(y) > s.blowUpBound()) {
                     return c.outcome(IntegrationOutcome.Ending.BLEW_UP, t, y, h, s);
@@ -233,10 +261,10 @@ public final class DormandPrince54 {
     }
 
     /** Starting step size, HNW Section II.4 as coded in DOPRI5's HINIT. */
-    private double initialStep(double t, double hMax, double direction, IntegratorSettings s, Counters c) {
+    private double initialStep(double t, double hMax, double direction, double[] rtol, double[] atol, Counters c) {
         double dnf = 0, dny = 0;
         for (int i = 0; i < n; i++) {
-            double sk = s.absoluteTolerance() + s.relativeTolerance() * Math.abs(y[i]);
+            double sk = atol[i] + rtol[i] * Math.abs(y[i]);
             dnf += (k1[i] / sk) * (k1[i] / sk);
             dny += (y[i] / sk) * (y[i] / sk);
         }
@@ -249,7 +277,7 @@ public final class DormandPrince54 {
         c.evaluations++;
         double der2 = 0;
         for (int i = 0; i < n; i++) {
-            double sk = s.absoluteTolerance() + s.relativeTolerance() * Math.abs(y[i]);
+            double sk = atol[i] + rtol[i] * Math.abs(y[i]);
             double d = (k2[i] - k1[i]) / sk;
             der2 += d * d;
         }
@@ -316,10 +344,12 @@ public final class DormandPrince54 {
 
     private static final class Counters {
         long evaluations, accepted, rejected;
+        double stiffAt = Double.NaN;
 
         IntegrationOutcome outcome(IntegrationOutcome.Ending ending, double t, double[] state, double h,
                 IntegratorSettings s) {
-            return new IntegrationOutcome(ending, t, state, evaluations, accepted, rejected, h, s.blowUpBound());
+            return new IntegrationOutcome(ending, t, state, evaluations, accepted, rejected, h, s.blowUpBound(),
+                    stiffAt);
         }
     }
 }

@@ -7,13 +7,22 @@ import java.util.Locale;
  *
  * @param time  the time reached: the end time, or where the integration stopped
  * @param state the last accepted state (at {@code time})
+ * @param stiffnessDetectedAt where an explicit method found the problem stiff (NaN if it did not, or could not tell)
  */
 public record IntegrationOutcome(Ending ending, double time, double[] state, long rhsEvaluations,
-        long acceptedSteps, long rejectedSteps, double lastStepSize, double blowUpBound) {
+        long acceptedSteps, long rejectedSteps, double lastStepSize, double blowUpBound, double stiffnessDetectedAt) {
+
+    public IntegrationOutcome(Ending ending, double time, double[] state, long rhsEvaluations, long acceptedSteps,
+            long rejectedSteps, double lastStepSize, double blowUpBound) {
+        this(ending, time, state, rhsEvaluations, acceptedSteps, rejectedSteps, lastStepSize, blowUpBound,
+                Double.NaN);
+    }
 
     /** The ways an integration can end. Only COMPLETED reaches the requested end time. */
     public enum Ending {
-        COMPLETED, BLEW_UP, STEP_SIZE_UNDERFLOW, NOT_FINITE, STEP_LIMIT, TIME_LIMIT, CANCELLED
+        COMPLETED, BLEW_UP, STEP_SIZE_UNDERFLOW, NOT_FINITE, STEP_LIMIT, TIME_LIMIT, CANCELLED,
+        /** An observer asked to stop (an event); integrators report the end of the step that contains it. */
+        STOPPED
     }
 
     public IntegrationOutcome {
@@ -29,9 +38,24 @@ public record IntegrationOutcome(Ending ending, double time, double[] state, lon
         return ending == Ending.COMPLETED;
     }
 
+    /** True when an explicit method saw the step size held down by stability rather than accuracy. */
+    public boolean stiffnessDetected() {
+        return !Double.isNaN(stiffnessDetectedAt);
+    }
+
     /** One line for a person, e.g. "integration blew up at t = 3.2e-01: |u| exceeded 1e12". */
     public String message() {
-        String at = "t = " + number(time);
+        return message("t");
+    }
+
+    /** {@link #message()} with the model's own name for time. */
+    public String message(String timeName) {
+        String main = describe(timeName + " = " + number(time));
+        return stiffnessDetected() ? main + "; stiff near " + timeName + " = " + number(stiffnessDetectedAt)
+                + ", use a stiff method (method stiff)" : main;
+    }
+
+    private String describe(String at) {
         return switch (ending) {
             case COMPLETED -> "integrated to " + at + " in " + acceptedSteps + " steps (" + rejectedSteps
                     + " rejected, " + rhsEvaluations + " evaluations)";
@@ -43,6 +67,7 @@ public record IntegrationOutcome(Ending ending, double time, double[] state, lon
                     + " steps";
             case TIME_LIMIT -> "wall-time limit reached at " + at;
             case CANCELLED -> "cancelled at " + at;
+            case STOPPED -> "stopped by an event at " + at;
         };
     }
 

@@ -8,4 +8,9 @@ public interface StepObserver {
 
     /** Called after every accepted step. */
     void step(DenseStep step);
+
+    /** Polled after every step: true ends the integration with {@link IntegrationOutcome.Ending#STOPPED}. */
+    default boolean stopRequested() {
+        return false;
+    }
 }

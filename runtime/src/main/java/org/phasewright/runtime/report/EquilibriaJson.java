@@ -9,6 +9,7 @@ import org.phasewright.runtime.study.StudyResult;
 /**
  * equilibria.json: model, study, outcome and message of the search, state names, parameter values, and per
  * equilibrium its coordinates (in the order of "states"), eigenvalues {re, im}, type and manifold dimensions.
+ * With declared symmetries also "symmetries", "invariantSubspaces", and per equilibrium "orbit" and "isotropy".
  * Non-finite numbers are written as null.
  */
 public final class EquilibriaJson {
@@ -30,6 +31,7 @@ public final class EquilibriaJson {
                     .append(", \"value\": ").append(Json.number(values[i])).append('}');
         }
         out.append("],\n");
+        out.append(SymmetrySummary.topFields(result.symmetry()));
         out.append("  \"equilibria\": [");
         List<Equilibrium> list = result.equilibria();
         for (int k = 0; k < list.size(); k++) {
@@ -49,7 +51,8 @@ public final class EquilibriaJson {
             out.append("      \"stableDimension\": ").append(e.classification().stableDimension()).append(",\n");
             out.append("      \"unstableDimension\": ").append(e.classification().unstableDimension()).append(",\n");
             out.append("      \"centreDimension\": ").append(e.classification().centreDimension()).append(",\n");
-            out.append("      \"residual\": ").append(Json.number(e.residual())).append("\n    }");
+            out.append("      \"residual\": ").append(Json.number(e.residual()))
+                    .append(SymmetrySummary.equilibriumFields(result.symmetry(), k, "      ")).append("\n    }");
         }
         out.append(list.isEmpty() ? "]\n" : "\n  ]\n").append("}\n");
         return out.toString();

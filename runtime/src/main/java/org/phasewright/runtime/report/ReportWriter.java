@@ -7,12 +7,15 @@ import java.util.List;
 
 import org.phasewright.runtime.study.AnalysisResult;
 import org.phasewright.runtime.study.EquilibriumResult;
+import org.phasewright.runtime.study.LyapunovResult;
+import org.phasewright.runtime.study.SectionResult;
 import org.phasewright.runtime.study.SimulationResult;
 import org.phasewright.runtime.study.StudyResult;
 
 /**
  * Writes every file of a study result into a folder: summary.txt, trajectory.csv for each simulation that produced
- * samples, equilibria.csv and equilibria.json for each search. The second simulation or search of a study gets
+ * samples, equilibria.csv and equilibria.json for each search, section.csv (the crossings, same columns as a
+ * trajectory) for each section, lyapunov.csv (running estimates) for each Lyapunov request. The second simulation or search of a study gets
  * files named trajectory-2.csv, equilibria-2.csv, and so on.
  */
 public final class ReportWriter {
@@ -22,7 +25,7 @@ public final class ReportWriter {
     /** @return the files written, in the order of the analyses, summary last */
     public static List<Path> writeAll(StudyResult study, Path folder) throws IOException {
         List<Path> written = new ArrayList<>();
-        int simulation = 0, search = 0;
+        int simulation = 0, search = 0, section = 0, lyapunov = 0;
         for (AnalysisResult r : study.results()) {
             switch (r) {
                 case SimulationResult s -> {
@@ -42,10 +45,26 @@ public final class ReportWriter {
                     AtomicFiles.write(json, EquilibriaJson.render(study, e));
                     written.add(json);
                 }
+                case SectionResult x -> {
+                    section++;
+                    if (x.points() != null) {
+                        Path file = folder.resolve(name("section", section, "csv"));
+                        AtomicFiles.write(file, out -> TrajectoryCsv.write(x.points(), out));
+                        written.add(file);
+                    }
+                }
+                case LyapunovResult l -> {
+                    lyapunov++;
+                    if (l.spectrum() != null) {
+                        Path file = folder.resolve(name("lyapunov", lyapunov, "csv"));
+                        AtomicFiles.write(file, LyapunovCsv.render(study.timeName(), l.spectrum()));
+                        written.add(file);
+                    }
+                }
             }
         }
         Path summary = folder.resolve("summary.txt");
-        AtomicFiles.write(summary, TextSummary.render(study));
+        AtomicFiles.write(summary, TextSummary.render(study) + "\n" + TextSummary.CAUTION + "\n");
         written.add(summary);
         return written;
     }

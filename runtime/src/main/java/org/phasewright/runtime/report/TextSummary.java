@@ -7,11 +7,17 @@ import org.phasewright.runtime.equilibria.Equilibrium;
 import org.phasewright.runtime.integrate.IntegrationOutcome;
 import org.phasewright.runtime.study.AnalysisResult;
 import org.phasewright.runtime.study.EquilibriumResult;
+import org.phasewright.runtime.study.LyapunovResult;
+import org.phasewright.runtime.study.SectionResult;
 import org.phasewright.runtime.study.SimulationResult;
 import org.phasewright.runtime.study.StudyResult;
 
 /** A plain-text account of a study for a terminal: outcomes, counts, final states and a table of equilibria. */
 public final class TextSummary {
+    /** Shown with every report: models of heaters, reactors and the like can drive real decisions. */
+    public static final String CAUTION = "These results describe the model, not the equipment it stands for; for any"
+            + " design or safety decision defer to the applicable codes and qualified review.";
+
     private TextSummary() {
     }
 
@@ -28,6 +34,10 @@ public final class TextSummary {
             switch (r) {
                 case SimulationResult s -> simulation(out, study, s, ++simulation);
                 case EquilibriumResult e -> equilibria(out, study, e, ++search);
+                case SectionResult x -> out.append("Section: ").append(x.outcome()).append(" - ")
+                        .append(x.message()).append('\n');
+                case LyapunovResult l -> out.append("Lyapunov exponents: ").append(l.outcome()).append(" - ")
+                        .append(l.message()).append('\n');
             }
         }
         return out.toString();
@@ -72,6 +82,7 @@ public final class TextSummary {
             rows.add(row);
         }
         table(out, rows);
+        SymmetrySummary.text(out, e.symmetry());
     }
 
     /** Conjugate pairs (adjacent after sorting: +b then -b) are shown once as a ± bi. */

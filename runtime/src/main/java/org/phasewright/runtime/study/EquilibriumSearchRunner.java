@@ -2,13 +2,18 @@ package org.phasewright.runtime.study;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 import org.phasewright.runtime.compile.CompiledModel;
+import org.phasewright.runtime.equilibria.Equilibrium;
 import org.phasewright.runtime.equilibria.EquilibriumFinder;
 import org.phasewright.runtime.equilibria.EquilibriumSearchOutcome;
+import org.phasewright.runtime.equilibria.PolynomialRoots;
 import org.phasewright.runtime.equilibria.StartPoints;
 import org.phasewright.runtime.integrate.DormandPrince54;
 import org.phasewright.runtime.integrate.IntegratorSettings;
+import org.phasewright.runtime.symmetry.SymmetryAnalysis;
+import org.phasewright.runtime.symmetry.SymmetryReport;
 
 /** Runs one equilibrium search, seeding Newton from a trajectory of the study or from a short one of its own. */
 final class EquilibriumSearchRunner {
@@ -27,11 +32,26 @@ final class EquilibriumSearchRunner {
         double[] p = model.parameters();
         List<double[]> points = trajectory != null ? rows(trajectory) : shortRun(model, p, settings, budget);
         StartPoints starts = StartPoints.build(p, model.initialState(), points, settings.equilibria());
+        // Polynomial rate laws: every isolated root by homotopy; its real roots are tried first.
+        Optional<PolynomialRoots.Summary> homotopy = PolynomialRoots.find(model.model(), p, budget.deadlineNanos(),
+                budget.cancelled());
+        if (homotopy.isPresent()) {
+            starts = starts.withLeading(homotopy.get().realRoots());
+        }
         EquilibriumSearchOutcome search = new EquilibriumFinder(model.field(), p, settings.equilibria())
                 .find(starts, budget.deadlineNanos(), budget.cancelled());
         Status status = search.ending() == EquilibriumSearchOutcome.Ending.COMPLETED ? Status.COMPLETED
                 : Status.INCOMPLETE;
-        return new EquilibriumResult(search.equilibria(), search, status, search.ending().name(), search.message());
+        String message = search.message() + homotopy.map(h -> "; " + h.message()).orElse("");
+        return new EquilibriumResult(search.equilibria(), search, status, search.ending().name(), message,
+                symmetry(model, search.equilibria()));
+    }
+
+    /** Orbits, isotropy and invariant subspaces under the declared symmetries (empty when there are none). */
+    private static SymmetryReport symmetry(CompiledModel model, List<Equilibrium> equilibria) {
+        return SymmetryAnalysis.analyse(SymmetryAnalysis.linearMaps(model.model()),
+                equilibria.stream().map(Equilibrium::name).toList(),
+                equilibria.stream().map(Equilibrium::coordinates).toList(), model.stateNames());
     }
 
     private static List<double[]> rows(Trajectory trajectory) {

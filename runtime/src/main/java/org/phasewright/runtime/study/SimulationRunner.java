@@ -6,10 +6,11 @@ import java.util.Locale;
 
 import org.phasewright.runtime.compile.CompiledModel;
 import org.phasewright.runtime.compile.DerivedValues;
-import org.phasewright.runtime.integrate.DormandPrince54;
+import org.phasewright.runtime.integrate.EventStop;
 import org.phasewright.runtime.integrate.IntegrationOutcome;
 import org.phasewright.runtime.integrate.IntegratorSettings;
 import org.phasewright.runtime.integrate.OutputSampler;
+import org.phasewright.runtime.integrate.SwitchingFunction;
 import org.phasewright.runtime.model.Expr;
 import org.phasewright.runtime.model.Simulation;
 import org.phasewright.runtime.symbolic.InitialValues;
@@ -29,6 +30,7 @@ final class SimulationRunner {
         double endTime = Double.NaN;
         double rtol = DEFAULT_RTOL;
         double[] start;
+        SwitchingFunction stopSurface = null;
         try {
             endTime = InitialValues.evaluate(simulation.endTime(), p, "end time");
             if (!(endTime > 0)) {
@@ -41,6 +43,10 @@ final class SimulationRunner {
                 }
             }
             start = startVector(model, simulation.start(), p);
+            if (simulation.stop() != null) {
+                stopSurface = Surfaces.of(model, simulation.stop().surface(), p);
+                stopSurface.value(0.0, start); // fail here, not inside the integrator, if it cannot be evaluated
+            }
         } catch (ModelEvaluationException e) {
             return new SimulationResult(null, null, endTime, rtol, Status.FAILED, "INVALID_INPUT", e.getMessage());
         }
@@ -53,17 +59,25 @@ final class SimulationRunner {
                 .withCancellation(budget.cancelled());
         OutputSampler sampler = new OutputSampler(OutputSampler.evenlySpaced(0.0, endTime, settings.samples()),
                 model.dimension());
-        IntegrationOutcome outcome = new DormandPrince54(model.field(), p)
-                .integrate(0.0, start, endTime, integratorSettings, sampler);
+        EventStop stop = stopSurface == null ? null : new EventStop(stopSurface,
+                Surfaces.direction(simulation.stop().direction()), model.dimension(), sampler);
+        IntegrationOutcome outcome = IntegratorChoice.create(simulation.method(), model, p)
+                .integrate(0.0, start, endTime, integratorSettings, stop == null ? sampler : stop);
+        if (outcome.ending() == IntegrationOutcome.Ending.STOPPED) { // report the event, not the step's end
+            outcome = new IntegrationOutcome(outcome.ending(), stop.time(), stop.state(), outcome.rhsEvaluations(),
+                    outcome.acceptedSteps(), outcome.rejectedSteps(), outcome.lastStepSize(), outcome.blowUpBound(),
+                    outcome.stiffnessDetectedAt());
+        }
 
         Trajectory trajectory = trajectory(model, p, sampler, outcome);
-        Status status = switch (outcome.ending()) {
-            case COMPLETED -> Status.COMPLETED;
-            case STEP_LIMIT, TIME_LIMIT, CANCELLED -> Status.INCOMPLETE;
-            case BLEW_UP, NOT_FINITE, STEP_SIZE_UNDERFLOW -> Status.FAILED;
-        };
-        return new SimulationResult(trajectory, outcome, endTime, rtol, status, outcome.ending().name(),
-                outcome.message());
+        String message = outcome.message(model.timeName());
+        if (outcome.ending() == IntegrationOutcome.Ending.STOPPED) {
+            message = "stopped by the condition at " + model.timeName() + " = "
+                    + SectionRunner.plain(stop.time()) + " after " + outcome.acceptedSteps() + " steps ("
+                    + outcome.rejectedSteps() + " rejected, " + outcome.rhsEvaluations() + " evaluations)";
+        }
+        return new SimulationResult(trajectory, outcome, endTime, rtol, IntegratorChoice.status(outcome),
+                outcome.ending().name(), message);
     }
 
     private static double[] startVector(CompiledModel model, List<Expr> start, double[] p) {
@@ -88,10 +102,11 @@ final class SimulationRunner {
         double[] times = sampler.times();
         double[][] states = sampler.states();
         int rows = times.length;
-        if (!outcome.completed() && (rows == 0 || outcome.time() > times[rows - 1])) {
+        double lastTime = outcome.time();
+        if (!outcome.completed() && (rows == 0 || lastTime > times[rows - 1])) {
             times = Arrays.copyOf(times, rows + 1);
             states = Arrays.copyOf(states, rows + 1);
-            times[rows] = outcome.time();
+            times[rows] = lastTime;
             states[rows] = outcome.state();
             rows++;
         }

@@ -29,6 +29,14 @@ public record StudyResult(String modelName, String studyName, String timeName, L
                 .toList();
     }
 
+    public List<SectionResult> sections() {
+        return results.stream().filter(SectionResult.class::isInstance).map(SectionResult.class::cast).toList();
+    }
+
+    public List<LyapunovResult> lyapunovSpectra() {
+        return results.stream().filter(LyapunovResult.class::isInstance).map(LyapunovResult.class::cast).toList();
+    }
+
     /** The worst status of any analysis (COMPLETED for an empty study). */
     public Status status() {
         Status worst = Status.COMPLETED;

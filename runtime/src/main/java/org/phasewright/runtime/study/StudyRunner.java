@@ -6,6 +6,8 @@ import java.util.List;
 import org.phasewright.runtime.compile.CompiledModel;
 import org.phasewright.runtime.model.Analysis;
 import org.phasewright.runtime.model.EquilibriumSearch;
+import org.phasewright.runtime.model.LyapunovExponents;
+import org.phasewright.runtime.model.Section;
 import org.phasewright.runtime.model.Simulation;
 import org.phasewright.runtime.model.Study;
 
@@ -30,6 +32,8 @@ public final class StudyRunner {
                     result = switch (analysis) {
                         case Simulation s -> SimulationRunner.run(model, s, settings, budget);
                         case EquilibriumSearch e -> EquilibriumSearchRunner.run(model, latest, settings, budget);
+                        case Section x -> SectionRunner.run(model, x, settings, budget);
+                        case LyapunovExponents l -> LyapunovRunner.run(model, l, settings, budget);
                     };
                 } catch (RuntimeException e) { // a bug must not surface as a stack trace in a user's terminal
                     result = failed(analysis, "internal error: " + e);
@@ -56,6 +60,8 @@ public final class StudyRunner {
             case Simulation s -> new SimulationResult(null, null, Double.NaN, Double.NaN, Status.INCOMPLETE, why,
                     message);
             case EquilibriumSearch e -> new EquilibriumResult(List.of(), null, Status.INCOMPLETE, why, message);
+            case Section x -> new SectionResult(null, null, Double.NaN, Status.INCOMPLETE, why, message);
+            case LyapunovExponents l -> new LyapunovResult(null, Double.NaN, Status.INCOMPLETE, why, message);
         };
     }
 
@@ -64,6 +70,9 @@ public final class StudyRunner {
             case Simulation s -> new SimulationResult(null, null, Double.NaN, Double.NaN, Status.FAILED,
                     "INTERNAL_ERROR", message);
             case EquilibriumSearch e -> new EquilibriumResult(List.of(), null, Status.FAILED, "INTERNAL_ERROR",
+                    message);
+            case Section x -> new SectionResult(null, null, Double.NaN, Status.FAILED, "INTERNAL_ERROR", message);
+            case LyapunovExponents l -> new LyapunovResult(null, Double.NaN, Status.FAILED, "INTERNAL_ERROR",
                     message);
         };
     }

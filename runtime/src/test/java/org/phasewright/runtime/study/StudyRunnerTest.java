@@ -52,7 +52,9 @@ class StudyRunnerTest {
         EquilibriumResult eq = result.equilibriumSearches().get(0);
         assertEquals("COMPLETED", eq.outcome());
         assertEquals(3, eq.equilibria().size()); // Lorenz (1963): origin and C±
-        assertEquals("found 3 equilibria from " + eq.search().startsTried() + " starts", eq.message());
+        // Polynomial rates of degrees 1, 2, 2: four homotopy paths, one of them to infinity (Lorenz 1963, Sec. 5).
+        assertEquals("found 3 equilibria from " + eq.search().startsTried() + " starts; homotopy: 4 paths, 3 finite,"
+                + " 3 real", eq.message());
     }
 
     @Test

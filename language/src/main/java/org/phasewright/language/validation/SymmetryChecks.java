@@ -1,0 +1,151 @@
+package org.phasewright.language.validation;
+
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+
+import org.eclipse.xtext.EcoreUtil2;
+import org.eclipse.xtext.validation.Check;
+import org.phasewright.language.ast.PhaseModels;
+import org.phasewright.language.lowering.ModelLowering;
+import org.phasewright.language.phase.PhaseModel;
+import org.phasewright.language.phase.RateDecl;
+import org.phasewright.language.phase.StateDecl;
+import org.phasewright.language.phase.StateMap;
+import org.phasewright.language.phase.SymmetryDecl;
+import org.phasewright.runtime.model.DynamicalModel;
+import org.phasewright.runtime.symmetry.EquivarianceCheck;
+import org.phasewright.runtime.symmetry.EquivarianceVerdict;
+import org.phasewright.runtime.symmetry.LinearMap;
+import org.phasewright.runtime.symmetry.PreparedField;
+import org.phasewright.runtime.symmetry.SymmetryDiscovery;
+
+/**
+ * Declared symmetries are invertible linear maps under which the rates are equivariant (or reversing); undeclared
+ * signed-permutation symmetries are pointed out with the declaration to add. Needs a model that lowers; a model
+ * with structural errors gets those first.
+ */
+public class SymmetryChecks extends PhaseCheckBase {
+
+    /** The lowered model and the prepared check, shared by all checks of one validation run. */
+    private record Prepared(DynamicalModel model, PreparedField field, EquivarianceCheck check) {
+    }
+
+    @Check
+    public void declaredSymmetryHolds(SymmetryDecl decl) {
+        try {
+            checkDeclared(decl);
+        } catch (RuntimeException unexpected) { // a numerical corner must not become a stack trace for the user
+            warning("Symmetry '" + decl.getName() + "' could not be checked (" + unexpected.getClass().getSimpleName()
+                    + ").", decl, PHASE.getSymmetryDecl_Name(), IssueCodes.SYMMETRY_UNVERIFIED);
+        }
+    }
+
+    private void checkDeclared(SymmetryDecl decl) {
+        PhaseModel phase = EcoreUtil2.getContainerOfType(decl, PhaseModel.class);
+        Prepared prepared = prepared(phase);
+        int index = PhaseModels.symmetries(phase).indexOf(decl);
+        if (prepared == null || index < 0 || index >= prepared.model().symmetries().size()) {
+            return;
+        }
+        var symmetry = prepared.model().symmetries().get(index);
+        int states = prepared.model().dimension();
+        Optional<Integer> nonlinear = LinearMap.nonlinearImage(symmetry, states);
+        if (nonlinear.isPresent()) {
+            StateMap map = mapOf(decl, PhaseModels.states(phase).get(nonlinear.get()));
+            String state = prepared.model().states().get(nonlinear.get()).name();
+            error("A symmetry is a linear map: the image of '" + state + "' must be a combination of states with "
+                    + "constant factors, such as `" + state + " -> -" + state + "`.", map == null ? decl : map,
+                    map == null ? PHASE.getSymmetryDecl_Name() : PHASE.getStateMap_Image(),
+                    IssueCodes.NONLINEAR_SYMMETRY);
+            return;
+        }
+        LinearMap g = LinearMap.of(symmetry, states).orElseThrow();
+        if (!g.invertible()) {
+            error("Symmetry '" + decl.getName() + "' is not invertible: it sends some non-zero state to zero, so it "
+                    + "cannot be a symmetry.", decl, PHASE.getSymmetryDecl_Name(), IssueCodes.SINGULAR_SYMMETRY);
+            return;
+        }
+        EquivarianceVerdict verdict = prepared.check().check(g);
+        String law = decl.isReversesTime() ? "f(g·u) = −g·f(u)" : "f(g·u) = g·f(u)";
+        switch (verdict.outcome()) {
+            case HOLDS -> info("Symmetry '" + decl.getName() + "' holds: " + law + ", checked " + verdict.methodText()
+                    + ".", decl, PHASE.getSymmetryDecl_Name(), IssueCodes.SYMMETRY_VERIFIED);
+            case UNDECIDED -> warning("Symmetry '" + decl.getName() + "' could not be checked: the rates are "
+                    + "undefined at most sample points.", decl, PHASE.getSymmetryDecl_Name(),
+                    IssueCodes.SYMMETRY_UNVERIFIED);
+            case BROKEN -> {
+                String state = prepared.model().states().get(verdict.brokenRate()).name();
+                RateDecl rate = rateOf(phase, PhaseModels.states(phase).get(verdict.brokenRate()));
+                String message = "This rate breaks symmetry '" + decl.getName() + "' (" + law + "): for the rate of "
+                        + state + ", f(g·u) = " + verdict.leftSide() + " but " + (decl.isReversesTime() ? "−" : "")
+                        + "g·f(u) = " + verdict.rightSide() + "; checked " + verdict.methodText() + ".";
+                if (rate != null && rate.getLaw() != null) {
+                    error(message, rate.getLaw(), null, IssueCodes.BROKEN_SYMMETRY, decl.getName());
+                } else {
+                    error(message, decl, PHASE.getSymmetryDecl_Name(), IssueCodes.BROKEN_SYMMETRY, decl.getName());
+                }
+            }
+        }
+    }
+
+    @Check
+    public void undeclaredSymmetries(PhaseModel phase) {
+        try {
+            discover(phase);
+        } catch (RuntimeException unexpected) { // discovery is a courtesy; never fail validation over it
+        }
+    }
+
+    private void discover(PhaseModel phase) {
+        Prepared prepared = prepared(phase);
+        if (prepared == null) {
+            return;
+        }
+        List<LinearMap> declared = new ArrayList<>();
+        for (var symmetry : prepared.model().symmetries()) {
+            LinearMap.of(symmetry, prepared.model().dimension()).filter(LinearMap::invertible)
+                    .filter(g -> prepared.check().check(g).holds()).ifPresent(declared::add);
+        }
+        Set<String> taken = new HashSet<>();
+        PhaseModels.symmetries(phase).forEach(s -> taken.add(s.getName()));
+        int counter = 0;
+        for (SymmetryDiscovery.Found found : new SymmetryDiscovery(prepared.field(), prepared.check())
+                .discover(declared)) {
+            String name;
+            do {
+                name = "s" + ++counter;
+            } while (taken.contains(name));
+            String declaration = found.symmetry().declaration(name, prepared.field().stateNames());
+            info("Undeclared symmetry: declare it with `" + declaration + "` (checked " + found.verdict().methodText()
+                    + ").", phase, PHASE.getPhaseModel_Name(), IssueCodes.SYMMETRY_DISCOVERED, declaration);
+        }
+    }
+
+    private Prepared prepared(PhaseModel phase) {
+        @SuppressWarnings("unchecked")
+        Optional<Prepared> prepared = (Optional<Prepared>) getContext().computeIfAbsent(Prepared.class,
+                key -> prepare(phase));
+        return prepared.orElse(null);
+    }
+
+    private static Optional<Prepared> prepare(PhaseModel phase) {
+        try {
+            DynamicalModel model = new ModelLowering().lower(phase);
+            PreparedField field = PreparedField.of(model);
+            return Optional.of(new Prepared(model, field, new EquivarianceCheck(field, model.time().name())));
+        } catch (RuntimeException notReady) { // errors elsewhere in the model, reported by their own checks
+            return Optional.empty();
+        }
+    }
+
+    private static StateMap mapOf(SymmetryDecl decl, StateDecl state) {
+        return decl.getMaps().stream().filter(m -> m.getState() == state).findFirst().orElse(null);
+    }
+
+    private static RateDecl rateOf(PhaseModel phase, StateDecl state) {
+        return PhaseModels.rates(phase).stream().filter(r -> r.getTarget() == state).findFirst().orElse(null);
+    }
+}

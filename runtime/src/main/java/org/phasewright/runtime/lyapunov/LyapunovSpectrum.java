@@ -1,0 +1,166 @@
+package org.phasewright.runtime.lyapunov;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.phasewright.runtime.compile.VectorField;
+import org.phasewright.runtime.integrate.DormandPrince853;
+import org.phasewright.runtime.integrate.IntegrationOutcome;
+import org.phasewright.runtime.integrate.IntegratorSettings;
+
+/**
+ * The full Lyapunov spectrum by the method of Benettin, Galgani, Giorgilli &amp; Strelcyn (Meccanica 15, 1980):
+ * integrate the orbit with its variational equations (exact Jacobian), re-orthonormalise the tangent vectors by a
+ * QR factorisation (modified Gram–Schmidt) at intervals, and average the logarithms of the diagonal of R.
+ * <p>
+ * The interval between QR steps adapts so that the tangent vectors grow or shrink by about e^2 between them: short
+ * enough to keep them well separated in floating point, long enough not to waste restarts.
+ */
+public final class LyapunovSpectrum {
+    /** Growth exponent targeted between two QR steps. */
+    private static final double TARGET_LOG_GROWTH = 2.0;
+    private static final int HISTORY_ROWS = 1000;
+
+    private final VectorField field;
+    private final double[] p;
+    private final int n;
+
+    public LyapunovSpectrum(VectorField field, double[] parameters) {
+        this.field = field;
+        this.p = parameters.clone();
+        this.n = field.dimension();
+    }
+
+    public LyapunovOutcome compute(double[] u0, double endTime, IntegratorSettings settings) {
+        if (!(endTime > 0)) {
+            throw new IllegalArgumentException("end time must be positive, got " + endTime);
+        }
+        VariationalField augmented = new VariationalField(field);
+        int m = augmented.dimension();
+        DormandPrince853 integrator = new DormandPrince853(augmented, p);
+        double[] y = new double[m];
+        System.arraycopy(u0, 0, y, 0, n);
+        for (int i = 0; i < n; i++) {
+            y[n + i * n + i] = 1; // Φ(0) = I
+        }
+        double[] logSum = new double[n];
+        double[] halfway = new double[n];
+        boolean halfwayTaken = false;
+        double[] norms = new double[n];
+        List<Double> historyTimes = new ArrayList<>();
+        List<double[]> history = new ArrayList<>();
+        double nextHistory = endTime / HISTORY_ROWS;
+
+        double t = 0, interval = firstInterval(u0, endTime);
+        double divergenceIntegral = 0;
+        long qrSteps = 0, evaluations = 0, accepted = 0, rejected = 0;
+        IntegrationOutcome last = null;
+        double stepHint = 0; // the last step size carries over, so restarts cost no step-size search
+        while (t < endTime) {
+            double tNext = Math.min(endTime, t + interval);
+            if (endTime - tNext < 1e-9 * interval) {
+                tNext = endTime;
+            }
+            IntegratorSettings chunk = settings.withSteps(stepHint, settings.maxStep())
+                    .withMaxSteps(Math.max(1, settings.maxSteps() - accepted - rejected));
+            last = integrator.integrate(t, y, tNext, chunk, null);
+            evaluations += last.rhsEvaluations();
+            accepted += last.acceptedSteps();
+            rejected += last.rejectedSteps();
+            if (!last.completed()) {
+                break;
+            }
+            y = last.state();
+            stepHint = Math.min(Math.abs(last.lastStepSize()), tNext - t);
+            divergenceIntegral += y[m - 1];
+            y[m - 1] = 0; // restart the divergence integral each chunk to keep its rounding small
+            double maxLog = orthonormalise(y, norms);
+            qrSteps++;
+            for (int i = 0; i < n; i++) {
+                logSum[i] += Math.log(norms[i]);
+            }
+            double done = tNext;
+            if (!halfwayTaken && done >= endTime / 2) {
+                for (int i = 0; i < n; i++) {
+                    halfway[i] = logSum[i] / done;
+                }
+                halfwayTaken = true;
+            }
+            if (done >= nextHistory || done == endTime) {
+                double[] row = new double[n];
+                for (int i = 0; i < n; i++) {
+                    row[i] = logSum[i] / done;
+                }
+                historyTimes.add(done);
+                history.add(row);
+                nextHistory = done + endTime / HISTORY_ROWS;
+            }
+            double factor = maxLog > 0 ? TARGET_LOG_GROWTH / maxLog : 2;
+            interval = Math.min(endTime / 10, interval * Math.max(0.5, Math.min(2, factor)));
+            t = tNext;
+        }
+        double reached = last != null && !last.completed() ? last.time() : t;
+        double[] exponents = new double[n];
+        for (int i = 0; i < n; i++) {
+            exponents[i] = t > 0 ? logSum[i] / t : Double.NaN;
+        }
+        if (!halfwayTaken) {
+            halfway = exponents.clone();
+        }
+        IntegrationOutcome summary = new IntegrationOutcome(last == null ? IntegrationOutcome.Ending.COMPLETED
+                : last.ending(), reached, java.util.Arrays.copyOf(last == null ? y : last.state(), n), evaluations,
+                accepted, rejected, last == null ? 0 : last.lastStepSize(), settings.blowUpBound());
+        double[] times = new double[historyTimes.size()];
+        for (int k = 0; k < times.length; k++) {
+            times[k] = historyTimes.get(k);
+        }
+        return new LyapunovOutcome(exponents, halfway, t > 0 ? divergenceIntegral / t : Double.NaN, t, times,
+                history.toArray(new double[0][]), qrSteps, summary);
+    }
+
+    /** A first interval short against the fastest rate at the start: 1/‖J(u0)‖∞, at most a tenth of the run. */
+    private double firstInterval(double[] u0, double endTime) {
+        double[] jac = new double[n * n];
+        field.jacobian(0, u0, p, jac);
+        double norm = 0;
+        for (int i = 0; i < n; i++) {
+            double row = 0;
+            for (int j = 0; j < n; j++) {
+                row += Math.abs(jac[i * n + j]);
+            }
+            norm = Math.max(norm, row);
+        }
+        double interval = norm > 0 && Double.isFinite(norm) ? 1 / norm : endTime / 100;
+        return Math.min(interval, endTime / 10);
+    }
+
+    /**
+     * Modified Gram–Schmidt on the columns of Φ (stored row-major after the states): Φ becomes Q and the column
+     * norms (the diagonal of R) go to {@code norms}. Returns the largest |log R_ii|.
+     */
+    private double orthonormalise(double[] y, double[] norms) {
+        double maxLog = 0;
+        for (int k = 0; k < n; k++) {
+            for (int j = 0; j < k; j++) {
+                double dot = 0;
+                for (int i = 0; i < n; i++) {
+                    dot += y[n + i * n + j] * y[n + i * n + k];
+                }
+                for (int i = 0; i < n; i++) {
+                    y[n + i * n + k] -= dot * y[n + i * n + j];
+                }
+            }
+            double norm = 0;
+            for (int i = 0; i < n; i++) {
+                norm += y[n + i * n + k] * y[n + i * n + k];
+            }
+            norm = Math.sqrt(norm);
+            norms[k] = norm;
+            for (int i = 0; i < n; i++) {
+                y[n + i * n + k] /= norm;
+            }
+            maxLog = Math.max(maxLog, Math.abs(Math.log(norm)));
+        }
+        return maxLog;
+    }
+}

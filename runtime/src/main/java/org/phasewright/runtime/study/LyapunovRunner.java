@@ -1,0 +1,76 @@
+package org.phasewright.runtime.study;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+import org.phasewright.runtime.compile.CompiledModel;
+import org.phasewright.runtime.integrate.IntegratorSettings;
+import org.phasewright.runtime.lyapunov.LyapunovOutcome;
+import org.phasewright.runtime.lyapunov.LyapunovSpectrum;
+import org.phasewright.runtime.model.LyapunovExponents;
+import org.phasewright.runtime.symbolic.InitialValues;
+import org.phasewright.runtime.symbolic.ModelEvaluationException;
+
+/** Runs one {@link LyapunovExponents} request from the model's initial values. */
+final class LyapunovRunner {
+    /** Benettin's method needs accurate tangent vectors; this is tighter than the simulation default. */
+    static final double DEFAULT_RTOL = 1e-9;
+
+    private LyapunovRunner() {
+    }
+
+    static LyapunovResult run(CompiledModel model, LyapunovExponents request, RunSettings settings, Budget budget) {
+        double[] p = model.parameters();
+        double endTime = Double.NaN;
+        double rtol = DEFAULT_RTOL;
+        try {
+            endTime = InitialValues.evaluate(request.endTime(), p, "end time");
+            if (!(endTime > 0)) {
+                throw new ModelEvaluationException("end time must be positive, got " + endTime);
+            }
+            if (request.tolerance() != null) {
+                rtol = InitialValues.evaluate(request.tolerance(), p, "tolerance");
+                if (!(rtol >= 1e-14 && rtol < 1)) {
+                    throw new ModelEvaluationException("tolerance must lie in [1e-14, 1), got " + rtol);
+                }
+            }
+        } catch (ModelEvaluationException e) {
+            return new LyapunovResult(null, endTime, Status.FAILED, "INVALID_INPUT", e.getMessage());
+        }
+        IntegratorSettings s = IntegratorSettings.DEFAULT
+                .withTolerances(rtol, rtol * SimulationRunner.ATOL_PER_RTOL)
+                .withMaxSteps(settings.maxSteps())
+                .withBlowUpBound(settings.blowUpBound())
+                .withDeadline(budget.deadlineNanos())
+                .withCancellation(budget.cancelled());
+        LyapunovOutcome spectrum = new LyapunovSpectrum(model.field(), p).compute(model.initialState(), endTime, s);
+        String time = model.timeName();
+        if (!spectrum.integration().completed()) {
+            return new LyapunovResult(spectrum, endTime, IntegratorChoice.status(spectrum.integration()),
+                    spectrum.integration().ending().name(), spectrum.integration().message(time)
+                            + "; exponents so far " + list(spectrum.exponents()));
+        }
+        String message = String.format(Locale.ROOT, "exponents %s per unit %s (sum %s, mean divergence %s); %s",
+                list(spectrum.exponents()), time, number(spectrum.sum()), number(spectrum.meanDivergence()),
+                spectrum.converged()
+                        ? "converged: no exponent moved by more than " + number(spectrum.largestChange())
+                                + " over the second half"
+                        : "not converged: an exponent moved by " + number(spectrum.largestChange())
+                                + " over the second half; integrate longer");
+        return new LyapunovResult(spectrum, endTime, Status.COMPLETED,
+                spectrum.converged() ? "COMPLETED" : "NOT_CONVERGED", message);
+    }
+
+    private static String list(double[] values) {
+        List<String> parts = new ArrayList<>();
+        for (double v : values) {
+            parts.add(number(v));
+        }
+        return String.join(", ", parts);
+    }
+
+    private static String number(double x) {
+        return String.format(Locale.ROOT, "%.5g", x);
+    }
+}

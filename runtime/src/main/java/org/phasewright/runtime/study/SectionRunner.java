@@ -1,0 +1,81 @@
+package org.phasewright.runtime.study;
+
+import java.util.Locale;
+
+import org.phasewright.runtime.compile.CompiledModel;
+import org.phasewright.runtime.compile.DerivedValues;
+import org.phasewright.runtime.integrate.CrossingLocator;
+import org.phasewright.runtime.integrate.IntegrationOutcome;
+import org.phasewright.runtime.integrate.IntegratorSettings;
+import org.phasewright.runtime.integrate.SwitchingFunction;
+import org.phasewright.runtime.model.Section;
+import org.phasewright.runtime.symbolic.InitialValues;
+import org.phasewright.runtime.symbolic.ModelEvaluationException;
+
+/** Runs one {@link Section}: integrates from the initial values and keeps the located crossings of the surface. */
+final class SectionRunner {
+    private SectionRunner() {
+    }
+
+    static SectionResult run(CompiledModel model, Section section, RunSettings settings, Budget budget) {
+        double[] p = model.parameters();
+        double endTime = Double.NaN;
+        double rtol = SimulationRunner.DEFAULT_RTOL;
+        SwitchingFunction g;
+        try {
+            endTime = InitialValues.evaluate(section.endTime(), p, "end time");
+            if (!(endTime > 0)) {
+                throw new ModelEvaluationException("end time must be positive, got " + endTime);
+            }
+            if (section.tolerance() != null) {
+                rtol = InitialValues.evaluate(section.tolerance(), p, "tolerance");
+                if (!(rtol >= 1e-14 && rtol < 1)) {
+                    throw new ModelEvaluationException("tolerance must lie in [1e-14, 1), got " + rtol);
+                }
+            }
+            g = Surfaces.of(model, section.surface(), p);
+            g.value(0.0, model.initialState()); // fail here, not inside the integrator, if it cannot be evaluated
+        } catch (ModelEvaluationException e) {
+            return new SectionResult(null, null, endTime, Status.FAILED, "INVALID_INPUT", e.getMessage());
+        }
+        IntegratorSettings integratorSettings = IntegratorSettings.DEFAULT
+                .withTolerances(rtol, rtol * SimulationRunner.ATOL_PER_RTOL)
+                .withMaxSteps(settings.maxSteps())
+                .withBlowUpBound(settings.blowUpBound())
+                .withDeadline(budget.deadlineNanos())
+                .withCancellation(budget.cancelled());
+        CrossingLocator locator = new CrossingLocator(g, Surfaces.direction(section.direction()), model.dimension(),
+                RunSettings.MAX_OUTPUT_SAMPLES);
+        IntegrationOutcome outcome = IntegratorChoice.create(section.method(), model, p)
+                .integrate(0.0, model.initialState(), endTime, integratorSettings, locator);
+
+        double[] times = locator.times();
+        double[][] states = locator.states();
+        DerivedValues dv = model.derivedValues();
+        double[][] derived = new double[times.length][dv.derivedCount()];
+        for (int k = 0; k < times.length; k++) {
+            dv.derived(times[k], states[k], p, derived[k]);
+        }
+        Trajectory points = new Trajectory(model.timeName(), model.stateNames(), model.derivedNames(), times, states,
+                derived);
+        String what = String.format(Locale.ROOT, "%d %s crossing%s", times.length,
+                section.direction().name().toLowerCase(Locale.ROOT).replace("both", "rising and falling"),
+                times.length == 1 ? "" : "s");
+        if (locator.truncated()) {
+            what += " (more were found than the " + RunSettings.MAX_OUTPUT_SAMPLES + " kept)";
+        }
+        String message = outcome.completed() ? what + " up to " + model.timeName() + " = "
+                + plain(endTime)
+                : outcome.message(model.timeName()) + "; " + what + " before that";
+        if (outcome.completed() && outcome.stiffnessDetected()) {
+            message += "; " + outcome.message(model.timeName()).replaceFirst("^.*; ", "");
+        }
+        return new SectionResult(points, outcome, endTime, IntegratorChoice.status(outcome), outcome.ending().name(),
+                message);
+    }
+
+    /** "1000" rather than "1000.0"; other values as Java prints them. */
+    static String plain(double x) {
+        return x == Math.rint(x) && Math.abs(x) < 1e15 ? Long.toString((long) x) : Double.toString(x);
+    }
+}

@@ -2,6 +2,7 @@ package org.phasewright.language.generator;
 
 import java.nio.file.Path;
 import java.time.Duration;
+import java.util.List;
 
 import org.eclipse.emf.common.util.URI;
 import org.eclipse.emf.ecore.resource.Resource;
@@ -12,6 +13,7 @@ import org.eclipse.xtext.util.CancelIndicator;
 import org.phasewright.language.phase.PhaseModel;
 import org.phasewright.language.standalone.StudyPipeline;
 import org.phasewright.language.standalone.StudyPipelineException;
+import org.phasewright.language.standalone.StudyRun;
 import org.phasewright.runtime.study.RunSettings;
 
 import com.google.inject.Singleton;
@@ -29,20 +31,30 @@ public class PhaseGenerator extends AbstractGenerator {
 
     @Override
     public void doGenerate(Resource resource, IFileSystemAccess2 fsa, IGeneratorContext context) {
+        try {
+            runStudies(resource, context.getCancelIndicator());
+        } catch (StudyPipelineException e) {
+            LOG.warn(resource.getURI() + ": " + e.getMessage());
+        }
+    }
+
+    /**
+     * Runs the studies of a model saved as a file and writes their results; returns what ran (empty when the
+     * resource is not a file or holds no model). Callers that report to a user (the language server) use this
+     * directly to learn how the studies went.
+     */
+    public List<StudyRun> runStudies(Resource resource, CancelIndicator cancelIndicator)
+            throws StudyPipelineException {
         URI uri = resource.getURI();
         if (!uri.isFile() || resource.getContents().isEmpty()
                 || !(resource.getContents().get(0) instanceof PhaseModel model) || !resource.getErrors().isEmpty()) {
-            return;
+            return List.of();
         }
+        // Callers outside a builder may pass no cancel indicator.
+        CancelIndicator cancel = cancelIndicator == null ? CancelIndicator.NullImpl : cancelIndicator;
         Path file = Path.of(uri.toFileString());
-        CancelIndicator cancel = context.getCancelIndicator() == null ? CancelIndicator.NullImpl
-                : context.getCancelIndicator(); // callers outside a builder may pass a context without one
         RunSettings settings = RunSettings.DEFAULT.withWallTimeLimit(ON_SAVE_TIME_LIMIT)
                 .withCancellation(cancel::isCanceled);
-        try {
-            StudyPipeline.run(model, StudyPipeline.resultsFolderFor(file), null, settings);
-        } catch (StudyPipelineException e) {
-            LOG.warn(file + ": " + e.getMessage());
-        }
+        return StudyPipeline.run(model, StudyPipeline.resultsFolderFor(file), null, settings);
     }
 }

@@ -112,4 +112,15 @@ class StudyOnSaveTest extends LanguageServerTestBase {
         Assertions.assertEquals("the model has errors", reports.get(0).message());
         assertFalse(Files.exists(resultsOf("broken.phase")));
     }
+
+    @Test
+    void studyThatEndsEarlyIsReportedAsFailedWithItsReason() {
+        // x' = x^2 from x(0) = 1 follows x = 1/(1 - t) and leaves every bound before t = 1 (closed form).
+        String uri = openModel("burst.phase", "model burst\nstate x = 1\nrate x = x^2\nstudy s { simulate to t = 2 }\n");
+        save(uri);
+        List<StudyFinished> reports = finished();
+        Assertions.assertEquals(1, reports.size());
+        Assertions.assertEquals("failed", reports.get(0).status(), reports.get(0)::toString);
+        assertTrue(reports.get(0).message().contains("blew up"), reports.get(0).message());
+    }
 }

@@ -3,23 +3,24 @@ package org.phasewright.language.ide.hover;
 import java.util.Optional;
 
 import org.phasewright.language.phase.UnitExpr;
+import org.phasewright.language.units.UnitResolver;
 
 import com.google.inject.ImplementedBy;
 
 /**
- * Turns a declared unit into its physical dimension for hovers (for example `m/s^2` into "length / time^2"). Units
- * checking is a later step; until it binds a real implementation, no dimension is shown.
+ * Turns a declared unit into its physical dimension in SI base units for hovers (for example `N` into
+ * "kg*m/s^2"); empty when the unit is unknown.
  */
-@ImplementedBy(DimensionDescriber.NotYetKnown.class)
+@ImplementedBy(DimensionDescriber.FromUnits.class)
 public interface DimensionDescriber {
 
     Optional<String> dimensionOf(UnitExpr unit);
 
-    /** The stand-in until units are checked: never claims a dimension. */
-    final class NotYetKnown implements DimensionDescriber {
+    /** Uses the checker's unit catalogue, so hovers and unit errors always agree. */
+    final class FromUnits implements DimensionDescriber {
         @Override
         public Optional<String> dimensionOf(UnitExpr unit) {
-            return Optional.empty();
+            return UnitResolver.resolve(unit).map(resolved -> resolved.dimension().toString());
         }
     }
 }

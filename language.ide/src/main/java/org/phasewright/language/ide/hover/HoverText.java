@@ -38,7 +38,7 @@ import com.google.inject.Inject;
 
 /**
  * The text shown when hovering a name in a `.phase` file: for a declared name its kind, description, value or
- * definition, range, unit and (once units are checked) dimension; for a built-in function what it computes.
+ * definition, range, unit and its dimension in SI base units; for a built-in function what it computes.
  * Editor-neutral: the Eclipse plugin calls {@link #at} or {@link #describe} directly, the language server through
  * {@link PhaseHoverService}.
  */
@@ -60,9 +60,9 @@ public class HoverText {
         this.dimensions = dimensions;
     }
 
-    /** A hover text without dimensions, for callers outside Guice. */
-    public static HoverText withoutDimensions() {
-        return new HoverText(new DimensionDescriber.NotYetKnown());
+    /** A hover text for callers outside Guice (the Eclipse plugin's hover). */
+    public static HoverText standalone() {
+        return new HoverText(new DimensionDescriber.FromUnits());
     }
 
     /** The hover for the name at {@code offset}: a declaration, a reference to one, or a function call. */

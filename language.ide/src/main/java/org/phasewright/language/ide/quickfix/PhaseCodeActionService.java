@@ -53,7 +53,10 @@ public class PhaseCodeActionService implements ICodeActionService2 {
                             : String.valueOf(diagnostic.getCode().getRight());
             int start = document.getOffSet(diagnostic.getRange().getStart());
             int end = document.getOffSet(diagnostic.getRange().getEnd());
-            for (QuickFix fix : quickFixes.fixesFor(xtext, code, start, end - start)) {
+            String message = diagnostic.getMessage() == null ? null
+                    : diagnostic.getMessage().isLeft() ? diagnostic.getMessage().getLeft()
+                            : diagnostic.getMessage().getRight().getValue();
+            for (QuickFix fix : quickFixes.fixesFor(xtext, code, start, end - start, message)) {
                 CodeAction action = new CodeAction(fix.title());
                 action.setKind(CodeActionKind.QuickFix);
                 action.setDiagnostics(List.of(diagnostic));

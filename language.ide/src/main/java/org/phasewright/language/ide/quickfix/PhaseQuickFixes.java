@@ -31,7 +31,8 @@ import org.phasewright.language.ide.text.TextChange;
  * <li>a state without a rate: add `rate NAME = 0` after the last rate (or after the state);</li>
  * <li>an unknown name: change it to a declared name within a small edit distance, or declare it;</li>
  * <li>the wrong time name in a simulation: change it to the model's;</li>
- * <li>a param never used: remove its declaration.</li>
+ * <li>a param never used: remove its declaration;</li>
+ * <li>an undeclared symmetry the checker found: insert the declaration its message quotes.</li>
  * </ul>
  */
 public final class PhaseQuickFixes {
@@ -40,6 +41,12 @@ public final class PhaseQuickFixes {
     private static final int MAX_PROPOSALS = 3;
 
     public List<QuickFix> fixesFor(XtextResource resource, String issueCode, int offset, int length) {
+        return fixesFor(resource, issueCode, offset, length, null);
+    }
+
+    /** As above; {@code message} is the problem's text, which carries what some fixes insert. */
+    public List<QuickFix> fixesFor(XtextResource resource, String issueCode, int offset, int length,
+            String message) {
         List<QuickFix> fixes = new ArrayList<>();
         PhaseModel model = modelOf(resource);
         if (issueCode == null || model == null || offset < 0) {
@@ -59,8 +66,26 @@ public final class PhaseQuickFixes {
             fixes.add(new QuickFix("Change to '" + time + "'", List.of(new TextChange(offset, length, time))));
         } else if (issueCode.equals(IssueCodes.UNUSED_PARAM)) {
             addRemoveParam(model, text, marked, fixes);
+        } else if (issueCode.equals(IssueCodes.SYMMETRY_DISCOVERED) && message != null) {
+            addSymmetryDeclaration(model, text, message, fixes);
         }
         return fixes;
+    }
+
+    /** The checker quotes the declaration in backticks: "Undeclared symmetry: declare it with `symmetry s1: ...`". */
+    private static void addSymmetryDeclaration(PhaseModel model, String text, String message, List<QuickFix> fixes) {
+        int open = message.indexOf("`symmetry ");
+        int close = open < 0 ? -1 : message.indexOf('`', open + 1);
+        if (close < 0) {
+            return;
+        }
+        String declaration = message.substring(open + 1, close);
+        List<? extends Member> after = PhaseModels.symmetries(model).isEmpty() ? PhaseModels.rates(model)
+                : PhaseModels.symmetries(model);
+        int at = after.isEmpty() ? headerEnd(model)
+                : NodeModelUtils.getNode(after.get(after.size() - 1)).getEndOffset();
+        fixes.add(new QuickFix("Declare '" + declaration + "'",
+                List.of(TextChange.insert(endOfLine(text, at), "\n" + declaration))));
     }
 
     private static void addMissingRate(PhaseModel model, String text, String stateName, int offset,

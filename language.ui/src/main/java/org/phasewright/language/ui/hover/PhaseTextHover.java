@@ -17,7 +17,7 @@ import org.phasewright.language.ui.PhaseLanguage;
 
 /**
  * Editor hover: problem messages at the spot first, then what the hovered name is (kind, description, value, range,
- * unit and, once units are checked, dimension) from the editor-neutral {@link HoverText}.
+ * unit and dimension) from the editor-neutral {@link HoverText}.
  */
 public final class PhaseTextHover implements ITextHover {
     private final String path;

@@ -44,14 +44,21 @@ public final class PhaseMarkerResolutions implements IMarkerResolutionGenerator2
         if (text == null) {
             return new IMarkerResolution[0];
         }
-        return fixes(file.getFullPath().toString(), text, code, start, end - start).stream()
+        return fixes(file.getFullPath().toString(), text, code, start, end - start,
+                marker.getAttribute(IMarker.MESSAGE, null)).stream()
                 .map(fix -> new Resolution(fix, text)).toArray(IMarkerResolution[]::new);
     }
 
     /** The fixes for a problem with {@code code} over {@code length} characters at {@code offset}; plain Java. */
     public static List<QuickFix> fixes(String path, String text, String code, int offset, int length) {
+        return fixes(path, text, code, offset, length, null);
+    }
+
+    /** As above, with the problem's message (some fixes insert what it quotes). */
+    public static List<QuickFix> fixes(String path, String text, String code, int offset, int length,
+            String message) {
         PhaseLanguage language = PhaseLanguage.get();
-        return new PhaseQuickFixes().fixesFor(language.parse(path, text), code, offset, length);
+        return new PhaseQuickFixes().fixesFor(language.parse(path, text), code, offset, length, message);
     }
 
     /** Applies the changes back to front so earlier offsets stay valid. */

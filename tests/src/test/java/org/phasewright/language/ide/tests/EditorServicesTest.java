@@ -34,6 +34,7 @@ import org.phasewright.language.ide.quickfix.PhaseQuickFixes;
 import org.phasewright.language.ide.quickfix.QuickFix;
 import org.phasewright.language.ide.text.TextChange;
 import org.phasewright.language.linking.PhaseLinkingDiagnosticMessageProvider;
+import org.phasewright.language.validation.IssueCodes;
 
 import com.google.inject.Injector;
 
@@ -83,8 +84,12 @@ class EditorServicesTest {
         assertEquals("length / time", hover.facts().fact("dimension"));
         assertTrue(hover.facts().plainText().startsWith("state q — loop flow\ninitial value: 1\nunit: m/s"),
                 hover.facts().plainText());
-        // Without a units checker no dimension is claimed.
-        assertEquals(null, HoverText.withoutDimensions().at(resource, offset).orElseThrow().facts().fact("dimension"));
+        // The real describer reads the unit catalogue: m/s is length over time in SI base units (SI Brochure, 9th ed.,
+        // table 2), and the newton is kg*m/s^2 (table 4).
+        assertEquals("m/s", HoverText.standalone().at(resource, offset).orElseThrow().facts().fact("dimension"));
+        XtextResource force = parse("model m\nparam push = 2 in N\nstate x = 0 in m\ntime t in s\nrate x = 0\n");
+        int at = "model m\nparam pu".length();
+        assertEquals("kg*m/s^2", HoverText.standalone().at(force, at).orElseThrow().facts().fact("dimension"));
     }
 
     @Test
@@ -116,5 +121,28 @@ class EditorServicesTest {
                 PhaseLinkingDiagnosticMessageProvider.UNKNOWN_NAME, offset, 3);
         assertEquals("Change to 'flux'", fixes.get(0).title());
         assertEquals(TEXT, TextChange.apply(text, fixes.get(0).changes()));
+    }
+
+    @Test
+    void undeclaredSymmetryIsDeclaredByItsQuickFix() {
+        // Lorenz (1963): (x, y, z) -> (-x, -y, z) maps solutions to solutions; the checker finds it undeclared.
+        String text = "model lorenz\nparam s = 10\nparam r = 28\nparam b = 8/3\nstate x = 1\nstate y = 1\nstate z = 1\n"
+                + "rate x = s*(y - x)\nrate y = r*x - y - x*z\nrate z = x*y - b*z\n";
+        XtextResource resource = parse(text);
+        var found = injector.getInstance(org.eclipse.xtext.validation.IResourceValidator.class)
+                .validate(resource, org.eclipse.xtext.validation.CheckMode.ALL, null).stream()
+                .filter(i -> IssueCodes.SYMMETRY_DISCOVERED.equals(i.getCode())).toList();
+        assertEquals(1, found.size(), found::toString);
+        var issue = found.get(0);
+        List<QuickFix> fixes = new PhaseQuickFixes().fixesFor(resource, issue.getCode(), issue.getOffset(),
+                issue.getLength(), issue.getMessage());
+        assertEquals(1, fixes.size());
+        String fixed = TextChange.apply(text, fixes.get(0).changes());
+        assertTrue(fixed.contains("rate z = x*y - b*z\nsymmetry "), fixed);
+        assertTrue(fixed.contains("x -> -x, y -> -y"), fixed);
+        XtextResource after = parse(fixed);
+        assertTrue(injector.getInstance(org.eclipse.xtext.validation.IResourceValidator.class)
+                .validate(after, org.eclipse.xtext.validation.CheckMode.ALL, null).stream()
+                .noneMatch(i -> IssueCodes.SYMMETRY_DISCOVERED.equals(i.getCode())), "declared now");
     }
 }

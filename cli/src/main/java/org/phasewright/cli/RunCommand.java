@@ -11,6 +11,7 @@ import org.phasewright.language.standalone.StudyPipeline;
 import org.phasewright.language.standalone.StudyPipelineException;
 import org.phasewright.language.standalone.StudyRun;
 import org.phasewright.runtime.report.TextSummary;
+import org.phasewright.runtime.study.ProgressListener;
 import org.phasewright.runtime.study.RunSettings;
 import org.phasewright.runtime.study.Status;
 
@@ -39,13 +40,17 @@ final class RunCommand {
         Path resultsRoot = parsed.option("out") != null ? Path.of(parsed.option("out"))
                 : StudyPipeline.resultsFolderFor(file);
         ReportStep reports = ReportStep.prepare(file, checked.ast(), parsed.option("axes"));
+        ProgressListener progress = TerminalProgress.forTerminal(err, parsed.flag("quiet"));
         List<StudyRun> runs;
         try {
-            runs = reports.run(checked.ast(), resultsRoot, parsed.option("study"), RunSettings.DEFAULT);
+            runs = reports.run(checked.ast(), resultsRoot, parsed.option("study"), RunSettings.DEFAULT.withProgress(
+                    progress));
         } catch (StudyPipelineException e) {
+            TerminalProgress.clear(progress);
             err.println(file + ": error: " + e.getMessage());
             return ExitCodes.MODEL_ERRORS;
         }
+        TerminalProgress.clear(progress);
         Status worst = Status.COMPLETED;
         boolean reportFailed = false;
         for (StudyRun run : runs) {

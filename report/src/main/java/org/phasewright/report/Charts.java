@@ -5,16 +5,22 @@ import java.awt.Shape;
 import java.awt.geom.Ellipse2D;
 import java.awt.geom.Path2D;
 import java.awt.geom.Rectangle2D;
+import java.text.DecimalFormat;
+import java.text.DecimalFormatSymbols;
 import java.util.ArrayList;
+import java.util.Locale;
 import java.util.List;
 
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.LegendItem;
 import org.jfree.chart.LegendItemCollection;
+import org.jfree.chart.axis.LogAxis;
 import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.axis.NumberTickUnit;
+import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
-import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 import org.phasewright.runtime.equilibria.Equilibrium;
@@ -86,7 +92,7 @@ final class Charts {
             }
             data.addSeries(series);
         }
-        XYLineAndShapeRenderer lines = new XYLineAndShapeRenderer(true, false);
+        SeriesGroupRenderer lines = new SeriesGroupRenderer(true, false);
         for (int s = 0; s < data.getSeriesCount(); s++) {
             lines.setSeriesPaint(s, PlotStyle.series(s));
             lines.setSeriesStroke(s, PlotStyle.LINE);
@@ -106,16 +112,23 @@ final class Charts {
         plot.setRangeAxis(PlotStyle.axis(yLabel));
         LegendItemCollection legend = new LegendItemCollection();
         int dataset = 0;
+        List<Equilibrium> shown = t == null || t.size() == 0 ? equilibria : near(t, i, j, equilibria);
+        if (shown.size() < equilibria.size()) {
+            int hidden = equilibria.size() - shown.size();
+            subtitle = (subtitle == null ? "" : subtitle + "; ") + hidden + (hidden == 1 ? " equilibrium lies"
+                    : " equilibria lie") + " far outside the trajectory and " + (hidden == 1 ? "is" : "are")
+                    + " not drawn (see the table)";
+        }
 
         // Equilibria first so that they are drawn on top (JFreeChart draws higher dataset indices first by default).
         XYSeriesCollection marks = new XYSeriesCollection();
-        XYLineAndShapeRenderer markRenderer = new XYLineAndShapeRenderer(false, true);
+        SeriesGroupRenderer markRenderer = new SeriesGroupRenderer(false, true);
         markRenderer.setUseFillPaint(true);
         markRenderer.setUseOutlinePaint(true);
         markRenderer.setDrawOutlines(true);
         for (Stability kind : Stability.values()) {
             XYSeries series = new XYSeries(kind.legend, false, true);
-            for (Equilibrium e : equilibria) {
+            for (Equilibrium e : shown) {
                 if (Stability.of(e) == kind) {
                     double[] c = e.coordinates();
                     series.add(c[i], c[j], false);
@@ -160,13 +173,14 @@ final class Charts {
             XYSeriesCollection curve = new XYSeriesCollection();
             curve.addSeries(orbit);
             curve.addSeries(start);
-            XYLineAndShapeRenderer line = new XYLineAndShapeRenderer(true, false);
+            SeriesGroupRenderer line = new SeriesGroupRenderer(true, false);
             Color teal = PlotStyle.series(0);
             line.setSeriesPaint(0, PlotStyle.translucent(teal, 215));
             line.setSeriesStroke(0, PlotStyle.THIN_LINE);
             line.setSeriesLinesVisible(1, false);
             line.setSeriesShapesVisible(1, true);
             line.setSeriesShape(1, SQUARE);
+            line.setDrawOutlines(false);
             line.setSeriesPaint(1, PlotStyle.series(1));
             plot.setDataset(dataset, curve);
             plot.setRenderer(dataset, line);
@@ -183,6 +197,12 @@ final class Charts {
             ordered.addAll(legend);
             legend = ordered;
         }
+        if (t == null || t.size() == 0) { // a few markers alone: keep them off the plot's edges
+            for (ValueAxis axis : new ValueAxis[] {plot.getDomainAxis(), plot.getRangeAxis()}) {
+                axis.setLowerMargin(0.12);
+                axis.setUpperMargin(0.12);
+            }
+        }
         plot.setFixedLegendItems(legend);
         return PlotStyle.finish(new JFreeChart(title, PlotStyle.TITLE, plot, legend.getItemCount() > 0), subtitle);
     }
@@ -195,8 +215,9 @@ final class Charts {
             series.add(points.state(k, i), points.state(k, j), false);
         }
         XYSeriesCollection data = new XYSeriesCollection(series);
-        XYLineAndShapeRenderer dots = new XYLineAndShapeRenderer(false, true);
+        SeriesGroupRenderer dots = new SeriesGroupRenderer(false, true);
         dots.setSeriesShape(0, DOT);
+        dots.setDrawOutlines(false);
         dots.setSeriesPaint(0, PlotStyle.translucent(PlotStyle.series(2), 200));
         XYPlot plot = new XYPlot(data, PlotStyle.axis(xLabel), PlotStyle.axis(yLabel), dots);
         return PlotStyle.finish(new JFreeChart(title, PlotStyle.TITLE, plot, false), subtitle);
@@ -219,16 +240,70 @@ final class Charts {
             }
             data.addSeries(series);
         }
-        XYLineAndShapeRenderer lines = new XYLineAndShapeRenderer(true, false);
+        SeriesGroupRenderer lines = new SeriesGroupRenderer(true, false);
         for (int s = 0; s < n; s++) {
             lines.setSeriesPaint(s, PlotStyle.series(s));
             lines.setSeriesStroke(s, PlotStyle.LINE);
         }
         NumberAxis y = PlotStyle.axis("running estimate (per unit time)");
-        XYPlot plot = new XYPlot(data, PlotStyle.axis(timeLabel), y, lines);
+        // Estimates settle like 1/t, so a logarithmic time axis shows the whole approach evenly.
+        ValueAxis x;
+        if (times.length > 1 && times[0] > 0) {
+            LogAxis log = new LogAxis(timeLabel + " (logarithmic)");
+            log.setBase(10);
+            DecimalFormat format = new DecimalFormat("#,##0.###", DecimalFormatSymbols.getInstance(Locale.ROOT));
+            log.setNumberFormatOverride(format);
+            log.setAutoTickUnitSelection(false);
+            log.setTickUnit(new NumberTickUnit(1, format), false, false); // one tick per decade
+            log.setSmallestValue(times[0]);
+            PlotStyle.style(log);
+            x = log;
+        } else {
+            x = PlotStyle.axis(timeLabel);
+        }
+        XYPlot plot = new XYPlot(data, x, y, lines);
         ValueMarker zero = new ValueMarker(0, PlotStyle.ZERO, PlotStyle.ZERO_LINE);
         plot.addRangeMarker(zero);
         return PlotStyle.finish(new JFreeChart(title, PlotStyle.TITLE, plot, n > 1), subtitle);
+    }
+
+    /** Views reach this many trajectory widths beyond the trajectory on each side to show nearby equilibria. */
+    static final double REACH = 1.5;
+
+    /**
+     * The equilibria near the trajectory: within {@link #REACH} times its extent beyond it on both axes. A model with
+     * a periodic family of equilibria (a pendulum's θ = kπ) would otherwise shrink the trajectory to a dot.
+     */
+    static List<Equilibrium> near(Trajectory t, int i, int j, List<Equilibrium> equilibria) {
+        double[] x = range(column(t, i)), y = range(column(t, j));
+        List<Equilibrium> kept = new ArrayList<>();
+        for (Equilibrium e : equilibria) {
+            double[] c = e.coordinates();
+            if (within(c[i], x) && within(c[j], y)) {
+                kept.add(e);
+            }
+        }
+        return kept;
+    }
+
+    private static boolean within(double v, double[] range) {
+        if (!(range[1] >= range[0])) {
+            return true; // no finite samples: nothing to compare with
+        }
+        double span = range[1] - range[0];
+        double reach = REACH * Math.max(span, 1e-6 * Math.max(1, Math.max(Math.abs(range[0]), Math.abs(range[1]))));
+        return v >= range[0] - reach && v <= range[1] + reach;
+    }
+
+    private static double[] range(double[] v) {
+        double lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
+        for (double d : v) {
+            if (Double.isFinite(d)) {
+                lo = Math.min(lo, d);
+                hi = Math.max(hi, d);
+            }
+        }
+        return new double[] {lo, hi};
     }
 
     static String subscript(int k) {

@@ -126,8 +126,8 @@ final class HtmlReport {
         }
         h.append("<p class=\"caution\">").append(e(TextSummary.CAUTION)).append("</p>\n");
         h.append("<footer>Written by phasewright ").append(e(context.toolVersion()))
-                .append(". Every number shown here is also in results.json; samples are in the CSV files beside "
-                        + "this folder.</footer>\n");
+                .append(". Every number shown here is also in results.json; the samples are in the CSV files of "
+                        + "the study folder, one level up.</footer>\n");
         h.append("</main>\n</body>\n</html>\n");
         return h.toString();
     }

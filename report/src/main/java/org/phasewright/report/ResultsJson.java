@@ -10,6 +10,7 @@ import org.phasewright.runtime.model.DynamicalModel;
 import org.phasewright.runtime.model.Parameter;
 import org.phasewright.runtime.model.StateVariable;
 import org.phasewright.runtime.study.AnalysisResult;
+import org.phasewright.runtime.study.ContinuationResult;
 import org.phasewright.runtime.study.EquilibriumResult;
 import org.phasewright.runtime.study.LyapunovResult;
 import org.phasewright.runtime.study.SectionResult;
@@ -148,6 +149,13 @@ final class ResultsJson {
                             .field("averagedOver", o.time()).field("reorthonormalisations",
                                     o.reorthonormalisations())
                             .field("historyRows", o.historyTimes().length);
+                }
+            }
+            case ContinuationResult c -> {
+                if (c.continuation() != null) {
+                    j.field("branches", c.continuation().branches().size())
+                            .field("points", c.continuation().pointCount())
+                            .field("specialPoints", c.continuation().specialPoints().size());
                 }
             }
         }

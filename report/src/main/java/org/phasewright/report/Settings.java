@@ -12,6 +12,7 @@ import org.phasewright.runtime.model.Section;
 import org.phasewright.runtime.model.Simulation;
 import org.phasewright.runtime.model.Study;
 import org.phasewright.runtime.study.AnalysisResult;
+import org.phasewright.runtime.study.ContinuationResult;
 import org.phasewright.runtime.study.EquilibriumResult;
 import org.phasewright.runtime.study.LyapunovResult;
 import org.phasewright.runtime.study.SectionResult;
@@ -28,6 +29,7 @@ final class Settings {
             case EquilibriumResult e -> "equilibria";
             case SectionResult x -> "section";
             case LyapunovResult l -> "lyapunov";
+            case ContinuationResult c -> "continuation";
         };
     }
 
@@ -37,6 +39,7 @@ final class Settings {
             case EquilibriumResult e -> "Equilibria";
             case SectionResult x -> "Poincaré section";
             case LyapunovResult l -> "Lyapunov exponents";
+            case ContinuationResult c -> "Continuation of equilibria";
         };
     }
 
@@ -79,6 +82,14 @@ final class Settings {
                 m.put("endTime", l.endTime());
                 if (declared instanceof LyapunovExponents) {
                     m.put("method", "QR re-orthonormalisation of the variational equations (Dormand–Prince 8)");
+                }
+            }
+            case ContinuationResult c -> {
+                if (c.continuation() != null) {
+                    m.put("parameter", c.continuation().parameterName());
+                    m.put("from", c.continuation().from());
+                    m.put("to", c.continuation().to());
+                    m.put("method", "pseudo-arclength continuation with fold, Hopf and branch-point test functions");
                 }
             }
         }

@@ -8,6 +8,7 @@ import org.phasewright.runtime.equilibria.Equilibrium;
 import org.phasewright.runtime.model.DynamicalModel;
 import org.phasewright.runtime.model.StateVariable;
 import org.phasewright.runtime.study.AnalysisResult;
+import org.phasewright.runtime.study.ContinuationResult;
 import org.phasewright.runtime.study.EquilibriumResult;
 import org.phasewright.runtime.study.LyapunovResult;
 import org.phasewright.runtime.study.SectionResult;
@@ -29,7 +30,7 @@ final class StudyPlots {
         String head = study.modelName() + " · " + study.studyName();
         String time = timeLabel(study, context.model());
         List<Plot> plots = new ArrayList<>();
-        int simulation = 0, section = 0, lyapunov = 0;
+        int simulation = 0, section = 0, lyapunov = 0, continuation = 0;
         boolean projected = false;
         List<AnalysisResult> results = study.results();
         for (int a = 0; a < results.size(); a++) {
@@ -43,7 +44,9 @@ final class StudyPlots {
                     String suffix = simulation > 1 ? "-" + simulation : "";
                     String setting = study.timeName() + " from 0 to " + Formats.plain(t.time(t.size() - 1)) + ", "
                             + t.size() + " samples" + (t.size() > Decimation.MAX_POINTS
-                                    ? ", thinned to at most " + Decimation.MAX_POINTS + " points per curve" : "");
+                                    ? ", thinned to at most " + Decimation.MAX_POINTS + " points per curve" : "")
+                            + (s.integration() != null && !s.integration().completed() ? "; ended early: "
+                                    + s.outcome().toLowerCase(Locale.ROOT).replace('_', ' ') : "");
                     var chart = Charts.timeSeries(t, time, labels(study, context.model()),
                             head + ": states against " + study.timeName(), setting);
                     plots.add(new Plot("time-series" + suffix, "time-series", chart.getTitle().getText(),
@@ -84,6 +87,22 @@ final class StudyPlots {
                 }
                 case EquilibriumResult e -> {
                     // Marked on the phase projections; drawn alone below when the study has no trajectory.
+                }
+                case ContinuationResult c -> {
+                    if (c.continuation() == null || c.continuation().branches().isEmpty()) {
+                        break;
+                    }
+                    continuation++;
+                    int state = BifurcationDiagram.widestState(c.continuation(), study.stateNames().size());
+                    String parameter = c.continuation().parameterName();
+                    var chart = BifurcationDiagram.chart(c, state, parameter,
+                            labels(study, context.model()).get(state), head + ": bifurcation diagram in " + parameter,
+                            c.continuation().branches().size() + " branches of equilibria, "
+                                    + c.cycles().size() + " families of periodic orbits");
+                    plots.add(new Plot("bifurcation" + (continuation > 1 ? "-" + continuation : ""),
+                            "bifurcation", chart.getTitle().getText(), study.stateNames().get(state)
+                                    + " against " + parameter + " on every branch; solid stable, dashed unstable,"
+                                    + " special points labelled.", Charts.seriesNames(chart), a, chart));
                 }
             }
         }

@@ -115,6 +115,31 @@ class DynamicsCommandLineTest {
     }
 
     @Test
+    void untilStopsTheSimulationAtTheFirstCrossing() throws Exception {
+        // A ball thrown up at 10 m/s under g = 9.81 m/s² lands (h = 0, falling) at t = 2·10/9.81 (closed form).
+        Path model = dir.resolve("ball.phase");
+        Files.writeString(model, """
+                model ball
+                param g = 9.81
+                state h = 0
+                state v = 10
+                let energy = v^2/2 + g*h
+                rate h = v
+                rate v = -g
+                study flight {
+                  simulate to t = 100 from (1e-9, 10) until h = 0 falling tolerance 1e-10
+                }
+                """);
+        CommandLine run = CommandLine.run("run", model.toString(), "--out", dir.resolve("out").toString());
+        assertEquals(0, run.exitCode(), run.out() + run.err());
+        assertTrue(run.out().contains("STOPPED - stopped by the condition at t = 2.0387"), run.out());
+        double[] last = lastRow(dir.resolve("out/flight/trajectory.csv"));
+        assertEquals(2 * 10 / 9.81, last[0], 1e-8);
+        assertEquals(0.0, last[1], 1e-8);
+        assertEquals(-10.0, last[2], 1e-7);
+    }
+
+    @Test
     void wrongTimeNameInTheNewAnalysesIsAnError() throws Exception {
         Path model = dir.resolve("bad.phase");
         Files.writeString(model, """

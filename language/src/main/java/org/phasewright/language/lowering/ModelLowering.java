@@ -11,6 +11,7 @@ import org.phasewright.language.ast.PhaseModels;
 import org.phasewright.language.phase.Analysis;
 import org.phasewright.language.phase.EquilibriaRequest;
 import org.phasewright.language.phase.Expression;
+import org.phasewright.language.phase.FollowRequest;
 import org.phasewright.language.phase.LetDecl;
 import org.phasewright.language.phase.LyapunovRequest;
 import org.phasewright.language.phase.SectionRequest;
@@ -30,6 +31,7 @@ import org.phasewright.runtime.model.BinaryOperator;
 import org.phasewright.runtime.model.Constant;
 import org.phasewright.runtime.model.DerivedQuantity;
 import org.phasewright.runtime.model.DynamicalModel;
+import org.phasewright.runtime.model.EquilibriumContinuation;
 import org.phasewright.runtime.model.EquilibriumSearch;
 import org.phasewright.runtime.model.Expr;
 import org.phasewright.runtime.model.IntegrationMethod;
@@ -163,11 +165,24 @@ public final class ModelLowering {
                 } else if (analysis instanceof LyapunovRequest lyapunov) {
                     analyses.add(new LyapunovExponents(expressions.lower(lyapunov.getEnd()),
                             lyapunov.getTolerance() == null ? null : expressions.lower(lyapunov.getTolerance())));
+                } else if (analysis instanceof FollowRequest follow) {
+                    analyses.add(follow(model, follow, expressions));
                 }
             }
             studies.add(new Study(decl.getName(), analyses));
         }
         return studies;
+    }
+
+    /** `follow equilibria in PARAM from A to B`: the param becomes a PARAMETER variable by its position. */
+    private static EquilibriumContinuation follow(PhaseModel model, FollowRequest follow,
+            ExpressionLowering expressions) {
+        int index = PhaseModels.params(model).indexOf(follow.getParameter());
+        if (index < 0) {
+            throw new LoweringException("follow equilibria varies something that is not a param");
+        }
+        return new EquilibriumContinuation(new Variable(VariableKind.PARAMETER, index, follow.getParameter().getName()),
+                expressions.lower(follow.getStart()), expressions.lower(follow.getEnd()));
     }
 
     /** The surface is written as `left = right`; the runtime looks for zeros of left - right. */

@@ -11,6 +11,7 @@ import org.eclipse.xtext.validation.Check;
 import org.phasewright.language.ast.DependencyOrder;
 import org.phasewright.language.ast.PhaseModels;
 import org.phasewright.language.phase.Expression;
+import org.phasewright.language.phase.FollowRequest;
 import org.phasewright.language.phase.FunctionCall;
 import org.phasewright.language.phase.ParamDecl;
 import org.phasewright.language.phase.PhaseModel;
@@ -85,6 +86,9 @@ public class ExpressionChecks extends PhaseCheckBase {
         }
         if (owner instanceof LyapunovRequest) {
             return "A Lyapunov setting";
+        }
+        if (owner instanceof FollowRequest) {
+            return "A continuation bound";
         }
         return null;
     }

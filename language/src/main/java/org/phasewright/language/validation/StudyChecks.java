@@ -5,7 +5,9 @@ import org.eclipse.emf.ecore.EStructuralFeature;
 import org.eclipse.xtext.EcoreUtil2;
 import org.eclipse.xtext.validation.Check;
 import org.phasewright.language.ast.PhaseModels;
+import org.phasewright.language.phase.FollowRequest;
 import org.phasewright.language.phase.LyapunovRequest;
+import org.phasewright.language.phase.ParamDecl;
 import org.phasewright.language.phase.PhaseModel;
 import org.phasewright.language.phase.SectionRequest;
 import org.phasewright.language.phase.SimulateRequest;
@@ -39,6 +41,16 @@ public class StudyChecks extends PhaseCheckBase {
     @Check
     public void lyapunovUsesModelTime(LyapunovRequest lyapunov) {
         timeName(lyapunov, lyapunov.getTimeName(), PHASE.getLyapunovRequest_TimeName(), "lyapunov to ");
+    }
+
+    @Check
+    public void followVariesAParam(FollowRequest follow) {
+        if (follow.getParameter() != null && !follow.getParameter().eIsProxy()
+                && !(follow.getParameter() instanceof ParamDecl)) {
+            error("`follow equilibria in NAME` varies a param; '" + follow.getParameter().getName() + "' is a "
+                    + PhaseModels.kindWord(follow.getParameter()) + ".", follow, PHASE.getFollowRequest_Parameter(),
+                    IssueCodes.NOT_CONSTANT);
+        }
     }
 
     private void timeName(EObject request, String written, EStructuralFeature feature, String form) {

@@ -1,8 +1,10 @@
 package org.phasewright.language.validation;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 
@@ -30,7 +32,12 @@ import org.phasewright.runtime.symmetry.SymmetryDiscovery;
 public class SymmetryChecks extends PhaseCheckBase {
 
     /** The lowered model and the prepared check, shared by all checks of one validation run. */
-    private record Prepared(DynamicalModel model, PreparedField field, EquivarianceCheck check) {
+    private record Prepared(DynamicalModel model, PreparedField field, EquivarianceCheck check,
+            Map<Integer, EquivarianceVerdict> verdicts) {
+        /** The verdict on declared symmetry {@code index}, computed once for both checks below. */
+        EquivarianceVerdict verdict(int index, LinearMap g) {
+            return verdicts.computeIfAbsent(index, i -> check.check(g));
+        }
     }
 
     @Check
@@ -68,7 +75,7 @@ public class SymmetryChecks extends PhaseCheckBase {
                     + "cannot be a symmetry.", decl, PHASE.getSymmetryDecl_Name(), IssueCodes.SINGULAR_SYMMETRY);
             return;
         }
-        EquivarianceVerdict verdict = prepared.check().check(g);
+        EquivarianceVerdict verdict = prepared.verdict(index, g);
         String law = decl.isReversesTime() ? "f(g·u) = −g·f(u)" : "f(g·u) = g·f(u)";
         switch (verdict.outcome()) {
             case HOLDS -> info("Symmetry '" + decl.getName() + "' holds: " + law + ", checked " + verdict.methodText()
@@ -105,9 +112,11 @@ public class SymmetryChecks extends PhaseCheckBase {
             return;
         }
         List<LinearMap> declared = new ArrayList<>();
-        for (var symmetry : prepared.model().symmetries()) {
-            LinearMap.of(symmetry, prepared.model().dimension()).filter(LinearMap::invertible)
-                    .filter(g -> prepared.check().check(g).holds()).ifPresent(declared::add);
+        for (int i = 0; i < prepared.model().symmetries().size(); i++) {
+            int index = i;
+            LinearMap.of(prepared.model().symmetries().get(i), prepared.model().dimension())
+                    .filter(LinearMap::invertible).filter(g -> prepared.verdict(index, g).holds())
+                    .ifPresent(declared::add);
         }
         Set<String> taken = new HashSet<>();
         PhaseModels.symmetries(phase).forEach(s -> taken.add(s.getName()));
@@ -135,7 +144,8 @@ public class SymmetryChecks extends PhaseCheckBase {
         try {
             DynamicalModel model = new ModelLowering().lower(phase);
             PreparedField field = PreparedField.of(model);
-            return Optional.of(new Prepared(model, field, new EquivarianceCheck(field, model.time().name())));
+            return Optional.of(new Prepared(model, field, new EquivarianceCheck(field, model.time().name()),
+                    new HashMap<>()));
         } catch (RuntimeException notReady) { // errors elsewhere in the model, reported by their own checks
             return Optional.empty();
         }

@@ -32,6 +32,12 @@ public final class LyapunovSpectrum {
     }
 
     public LyapunovOutcome compute(double[] u0, double endTime, IntegratorSettings settings) {
+        return compute(u0, endTime, settings, null);
+    }
+
+    /** @param timeReached hears the time reached after each re-orthonormalisation (for progress), or null */
+    public LyapunovOutcome compute(double[] u0, double endTime, IntegratorSettings settings,
+            java.util.function.DoubleConsumer timeReached) {
         if (!(endTime > 0)) {
             throw new IllegalArgumentException("end time must be positive, got " + endTime);
         }
@@ -98,6 +104,9 @@ public final class LyapunovSpectrum {
             double factor = maxLog > 0 ? TARGET_LOG_GROWTH / maxLog : 2;
             interval = Math.min(endTime / 10, interval * Math.max(0.5, Math.min(2, factor)));
             t = tNext;
+            if (timeReached != null) {
+                timeReached.accept(t);
+            }
         }
         double reached = last != null && !last.completed() ? last.time() : t;
         double[] exponents = new double[n];

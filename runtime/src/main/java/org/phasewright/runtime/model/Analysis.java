@@ -1,5 +1,6 @@
 package org.phasewright.runtime.model;
 
 /** One request inside a study. */
-public sealed interface Analysis permits Simulation, EquilibriumSearch, Section, LyapunovExponents {
+public sealed interface Analysis permits Simulation, EquilibriumSearch, Section, LyapunovExponents,
+        EquilibriumContinuation {
 }

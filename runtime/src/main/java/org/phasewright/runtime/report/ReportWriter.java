@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.phasewright.runtime.study.AnalysisResult;
+import org.phasewright.runtime.study.ContinuationResult;
 import org.phasewright.runtime.study.EquilibriumResult;
 import org.phasewright.runtime.study.LyapunovResult;
 import org.phasewright.runtime.study.SectionResult;
@@ -15,7 +16,9 @@ import org.phasewright.runtime.study.StudyResult;
 /**
  * Writes every file of a study result into a folder: summary.txt, trajectory.csv for each simulation that produced
  * samples, equilibria.csv and equilibria.json for each search, section.csv (the crossings, same columns as a
- * trajectory) for each section, lyapunov.csv (running estimates) for each Lyapunov request. The second simulation or search of a study gets
+ * trajectory) for each section, lyapunov.csv (running estimates) for each Lyapunov request,
+ * branches.csv and branches.json for each continuation (and cycles.csv when it
+ * followed periodic orbits from Hopf points). The second simulation or search of a study gets
  * files named trajectory-2.csv, equilibria-2.csv, and so on.
  */
 public final class ReportWriter {
@@ -25,7 +28,7 @@ public final class ReportWriter {
     /** @return the files written, in the order of the analyses, summary last */
     public static List<Path> writeAll(StudyResult study, Path folder) throws IOException {
         List<Path> written = new ArrayList<>();
-        int simulation = 0, search = 0, section = 0, lyapunov = 0;
+        int simulation = 0, search = 0, section = 0, lyapunov = 0, continuation = 0;
         for (AnalysisResult r : study.results()) {
             switch (r) {
                 case SimulationResult s -> {
@@ -59,6 +62,23 @@ public final class ReportWriter {
                         Path file = folder.resolve(name("lyapunov", lyapunov, "csv"));
                         AtomicFiles.write(file, LyapunovCsv.render(study.timeName(), l.spectrum()));
                         written.add(file);
+                    }
+                }
+                case ContinuationResult c -> {
+                    continuation++;
+                    if (c.continuation() != null) {
+                        Path csv = folder.resolve(name("branches", continuation, "csv"));
+                        AtomicFiles.write(csv, BranchesCsv.render(study.stateNames(), c.continuation()));
+                        written.add(csv);
+                        Path json = folder.resolve(name("branches", continuation, "json"));
+                        AtomicFiles.write(json, BranchesJson.render(study, c));
+                        written.add(json);
+                        if (!c.cycles().isEmpty()) {
+                            Path cycles = folder.resolve(name("cycles", continuation, "csv"));
+                            AtomicFiles.write(cycles, CyclesCsv.render(c.continuation().parameterName(),
+                                    study.stateNames(), c.cycles()));
+                            written.add(cycles);
+                        }
                     }
                 }
             }

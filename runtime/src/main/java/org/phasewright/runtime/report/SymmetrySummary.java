@@ -32,14 +32,18 @@ final class SymmetrySummary {
         }
         byIsotropy.forEach((isotropy, names) -> out.append("  Fixed by ").append(isotropy).append(": ")
                 .append(String.join(", ", names)).append('\n'));
+        // An image of an equilibrium is an equilibrium too: a missing one shows the search was incomplete.
+        Map<String, List<String>> missing = new LinkedHashMap<>();
         for (EquilibriumSymmetry e : report.equilibria()) {
             for (String image : e.images()) {
                 if (image.endsWith(SymmetryAnalysis.MISSING)) {
-                    out.append("  Note: ").append(image, 0, image.indexOf(':')).append(" maps ")
-                            .append(e.equilibrium()).append(" to an equilibrium the search did not find\n");
+                    missing.computeIfAbsent(image.substring(0, image.indexOf(':')), k -> new ArrayList<>())
+                            .add(e.equilibrium());
                 }
             }
         }
+        missing.forEach((symmetry, names) -> out.append("  Not found: the images under ").append(symmetry)
+                .append(" of ").append(String.join(", ", names)).append(" (equilibria too; the search missed them)\n"));
         for (InvariantSubspace s : report.invariantSubspaces()) {
             out.append("  Invariant subspace ").append(s.equations())
                     .append(s.description().equals(s.equations()) ? "" : " (" + s.description() + ")")

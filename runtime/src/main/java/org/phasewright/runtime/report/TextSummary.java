@@ -6,6 +6,7 @@ import java.util.List;
 import org.phasewright.runtime.equilibria.Equilibrium;
 import org.phasewright.runtime.integrate.IntegrationOutcome;
 import org.phasewright.runtime.study.AnalysisResult;
+import org.phasewright.runtime.study.ContinuationResult;
 import org.phasewright.runtime.study.EquilibriumResult;
 import org.phasewright.runtime.study.LyapunovResult;
 import org.phasewright.runtime.study.SectionResult;
@@ -38,6 +39,7 @@ public final class TextSummary {
                         .append(x.message()).append('\n');
                 case LyapunovResult l -> out.append("Lyapunov exponents: ").append(l.outcome()).append(" - ")
                         .append(l.message()).append('\n');
+                case ContinuationResult c -> ContinuationSummary.text(out, study, c);
             }
         }
         return out.toString();

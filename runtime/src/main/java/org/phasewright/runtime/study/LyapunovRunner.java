@@ -44,7 +44,9 @@ final class LyapunovRunner {
                 .withBlowUpBound(settings.blowUpBound())
                 .withDeadline(budget.deadlineNanos())
                 .withCancellation(budget.cancelled());
-        LyapunovOutcome spectrum = new LyapunovSpectrum(model.field(), p).compute(model.initialState(), endTime, s);
+        LyapunovOutcome spectrum = new LyapunovSpectrum(model.field(), p).compute(model.initialState(), endTime, s,
+                ProgressObserver.timeListener(settings, ProgressObserver.task("lyapunov", model.timeName(), endTime),
+                        0.0, endTime));
         String time = model.timeName();
         if (!spectrum.integration().completed()) {
             return new LyapunovResult(spectrum, endTime, IntegratorChoice.status(spectrum.integration()),

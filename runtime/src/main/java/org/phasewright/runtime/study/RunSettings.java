@@ -13,9 +13,10 @@ import org.phasewright.runtime.equilibria.EquilibriumSettings;
  * @param wallTimeLimit for the whole study, or null for none
  * @param outputSamples minimum number of evenly spaced output times per simulation (at least 1000 are used)
  * @param blowUpBound   |u|_inf beyond which a simulation is reported as blowing up
+ * @param progress      hears the fraction of simulated time done by integrations ({@link ProgressListener#NONE})
  */
 public record RunSettings(long maxSteps, Duration wallTimeLimit, BooleanSupplier cancelled, int outputSamples,
-        double blowUpBound, EquilibriumSettings equilibria) {
+        double blowUpBound, EquilibriumSettings equilibria, ProgressListener progress) {
 
     public static final int MIN_OUTPUT_SAMPLES = 1000;
     /** Caps memory: a trajectory never stores more rows than this. */
@@ -34,30 +35,43 @@ public record RunSettings(long maxSteps, Duration wallTimeLimit, BooleanSupplier
         if (equilibria == null) {
             equilibria = EquilibriumSettings.DEFAULT;
         }
+        if (progress == null) {
+            progress = ProgressListener.NONE;
+        }
+    }
+
+    /** Without a progress listener. */
+    public RunSettings(long maxSteps, Duration wallTimeLimit, BooleanSupplier cancelled, int outputSamples,
+            double blowUpBound, EquilibriumSettings equilibria) {
+        this(maxSteps, wallTimeLimit, cancelled, outputSamples, blowUpBound, equilibria, ProgressListener.NONE);
+    }
+
+    public RunSettings withProgress(ProgressListener listener) {
+        return new RunSettings(maxSteps, wallTimeLimit, cancelled, outputSamples, blowUpBound, equilibria, listener);
     }
 
     public RunSettings withMaxSteps(long steps) {
-        return new RunSettings(steps, wallTimeLimit, cancelled, outputSamples, blowUpBound, equilibria);
+        return new RunSettings(steps, wallTimeLimit, cancelled, outputSamples, blowUpBound, equilibria, progress);
     }
 
     public RunSettings withWallTimeLimit(Duration limit) {
-        return new RunSettings(maxSteps, limit, cancelled, outputSamples, blowUpBound, equilibria);
+        return new RunSettings(maxSteps, limit, cancelled, outputSamples, blowUpBound, equilibria, progress);
     }
 
     public RunSettings withCancellation(BooleanSupplier flag) {
-        return new RunSettings(maxSteps, wallTimeLimit, flag, outputSamples, blowUpBound, equilibria);
+        return new RunSettings(maxSteps, wallTimeLimit, flag, outputSamples, blowUpBound, equilibria, progress);
     }
 
     public RunSettings withOutputSamples(int samples) {
-        return new RunSettings(maxSteps, wallTimeLimit, cancelled, samples, blowUpBound, equilibria);
+        return new RunSettings(maxSteps, wallTimeLimit, cancelled, samples, blowUpBound, equilibria, progress);
     }
 
     public RunSettings withBlowUpBound(double bound) {
-        return new RunSettings(maxSteps, wallTimeLimit, cancelled, outputSamples, bound, equilibria);
+        return new RunSettings(maxSteps, wallTimeLimit, cancelled, outputSamples, bound, equilibria, progress);
     }
 
     public RunSettings withEquilibria(EquilibriumSettings settings) {
-        return new RunSettings(maxSteps, wallTimeLimit, cancelled, outputSamples, blowUpBound, settings);
+        return new RunSettings(maxSteps, wallTimeLimit, cancelled, outputSamples, blowUpBound, settings, progress);
     }
 
     /** Number of output times a simulation uses. */

@@ -47,7 +47,8 @@ final class SectionRunner {
         CrossingLocator locator = new CrossingLocator(g, Surfaces.direction(section.direction()), model.dimension(),
                 RunSettings.MAX_OUTPUT_SAMPLES);
         IntegrationOutcome outcome = IntegratorChoice.create(section.method(), model, p)
-                .integrate(0.0, model.initialState(), endTime, integratorSettings, locator);
+                .integrate(0.0, model.initialState(), endTime, integratorSettings, ProgressObserver.wrap(locator,
+                        settings, ProgressObserver.task("section", model.timeName(), endTime), 0.0, endTime));
 
         double[] times = locator.times();
         double[][] states = locator.states();

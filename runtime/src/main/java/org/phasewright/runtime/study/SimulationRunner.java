@@ -62,7 +62,8 @@ final class SimulationRunner {
         EventStop stop = stopSurface == null ? null : new EventStop(stopSurface,
                 Surfaces.direction(simulation.stop().direction()), model.dimension(), sampler);
         IntegrationOutcome outcome = IntegratorChoice.create(simulation.method(), model, p)
-                .integrate(0.0, start, endTime, integratorSettings, stop == null ? sampler : stop);
+                .integrate(0.0, start, endTime, integratorSettings, ProgressObserver.wrap(stop == null ? sampler : stop,
+                        settings, ProgressObserver.task("simulate", model.timeName(), endTime), 0.0, endTime));
         if (outcome.ending() == IntegrationOutcome.Ending.STOPPED) { // report the event, not the step's end
             outcome = new IntegrationOutcome(outcome.ending(), stop.time(), stop.state(), outcome.rhsEvaluations(),
                     outcome.acceptedSteps(), outcome.rejectedSteps(), outcome.lastStepSize(), outcome.blowUpBound(),

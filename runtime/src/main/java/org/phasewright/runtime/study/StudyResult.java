@@ -37,6 +37,11 @@ public record StudyResult(String modelName, String studyName, String timeName, L
         return results.stream().filter(LyapunovResult.class::isInstance).map(LyapunovResult.class::cast).toList();
     }
 
+    public List<ContinuationResult> continuations() {
+        return results.stream().filter(ContinuationResult.class::isInstance).map(ContinuationResult.class::cast)
+                .toList();
+    }
+
     /** The worst status of any analysis (COMPLETED for an empty study). */
     public Status status() {
         Status worst = Status.COMPLETED;

@@ -5,6 +5,7 @@ import java.util.List;
 
 import org.phasewright.runtime.compile.CompiledModel;
 import org.phasewright.runtime.model.Analysis;
+import org.phasewright.runtime.model.EquilibriumContinuation;
 import org.phasewright.runtime.model.EquilibriumSearch;
 import org.phasewright.runtime.model.LyapunovExponents;
 import org.phasewright.runtime.model.Section;
@@ -34,6 +35,7 @@ public final class StudyRunner {
                         case EquilibriumSearch e -> EquilibriumSearchRunner.run(model, latest, settings, budget);
                         case Section x -> SectionRunner.run(model, x, settings, budget);
                         case LyapunovExponents l -> LyapunovRunner.run(model, l, settings, budget);
+                        case EquilibriumContinuation c -> ContinuationRunner.run(model, c, settings, budget);
                     };
                 } catch (RuntimeException e) { // a bug must not surface as a stack trace in a user's terminal
                     result = failed(analysis, "internal error: " + e);
@@ -62,6 +64,7 @@ public final class StudyRunner {
             case EquilibriumSearch e -> new EquilibriumResult(List.of(), null, Status.INCOMPLETE, why, message);
             case Section x -> new SectionResult(null, null, Double.NaN, Status.INCOMPLETE, why, message);
             case LyapunovExponents l -> new LyapunovResult(null, Double.NaN, Status.INCOMPLETE, why, message);
+            case EquilibriumContinuation c -> new ContinuationResult(null, Status.INCOMPLETE, why, message);
         };
     }
 
@@ -74,6 +77,7 @@ public final class StudyRunner {
             case Section x -> new SectionResult(null, null, Double.NaN, Status.FAILED, "INTERNAL_ERROR", message);
             case LyapunovExponents l -> new LyapunovResult(null, Double.NaN, Status.FAILED, "INTERNAL_ERROR",
                     message);
+            case EquilibriumContinuation c -> new ContinuationResult(null, Status.FAILED, "INTERNAL_ERROR", message);
         };
     }
 }

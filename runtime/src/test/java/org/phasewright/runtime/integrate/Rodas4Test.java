@@ -157,4 +157,33 @@ class Rodas4Test {
         // An explicit method would need about |λ|·20/3.3 ≈ 6e6 steps.
         assertTrue(o.acceptedSteps() < 1000, "steps " + o.acceptedSteps());
     }
+
+    @Test
+    void everyMethodNamesABlowUpWithItsTime() {
+        // y' = y², y(0) = 1 has y = 1/(1 - t) (closed form), beyond 1e12 just before t = 1.
+        VectorField square = new VectorField() {
+            @Override
+            public int dimension() {
+                return 1;
+            }
+
+            @Override
+            public void rates(double t, double[] y, double[] p, double[] d) {
+                d[0] = y[0] * y[0];
+            }
+
+            @Override
+            public void jacobian(double t, double[] y, double[] p, double[] j) {
+                j[0] = 2 * y[0];
+            }
+        };
+        for (Integrator method : new Integrator[] {new Rodas4(square, new double[0], true),
+                new DormandPrince853(square, new double[0]), new DormandPrince54(square, new double[0])}) {
+            IntegrationOutcome o = method.integrate(0, new double[] {1}, 2, IntegratorSettings.DEFAULT, null);
+            String name = method.getClass().getSimpleName();
+            assertEquals(IntegrationOutcome.Ending.BLEW_UP, o.ending(), name);
+            assertEquals(1.0, o.time(), 1e-6, name);
+            assertTrue(o.message("tau").startsWith("integration blew up at tau = 1.0e+00"), o.message("tau"));
+        }
+    }
 }

@@ -82,4 +82,21 @@ public class LyapunovSpectrumTest {
         assertEquals(-1.0, o.exponents()[0], 1e-7);
         assertEquals(-3.0, o.exponents()[1], 1e-7);
     }
+
+    @Test
+    void convergenceCheckFlagsARunTooShortForItsTransient() {
+        // x' = -2x, y' = 100x - y: Φ(t)e1 = (e^-2t, 100(e^-t - e^-2t)), so the leading estimate is
+        // -1 + ln(100)/t to leading order (closed form): it has moved by about ln(100)/10 ≈ 0.46 between t = 5 and
+        // t = 10, but only by ln(100)/4000 ≈ 0.001 between t = 2000 and 4000.
+        Variable x = state(0, "x"), y = state(1, "y");
+        DynamicalModel sheared = TestModels.model("sheared", List.of(stateVar("x", 1), stateVar("y", 0)), List.of(),
+                List.of(), List.of(mul(c(-2), x), sub(mul(c(100), x), y)));
+        LyapunovOutcome shortRun = spectrum(sheared, 10, 1e-10);
+        assertTrue(!shortRun.converged(), "change " + shortRun.largestChange());
+        assertEquals(-1 + Math.log(100) / 10, shortRun.exponents()[0], 0.01);
+        LyapunovOutcome longRun = spectrum(sheared, 4000, 1e-10);
+        assertTrue(longRun.converged(), "change " + longRun.largestChange());
+        assertEquals(-1 + Math.log(100) / 4000, longRun.exponents()[0], 1e-3);
+        assertEquals(-3.0, longRun.sum(), 1e-8); // trace of the constant Jacobian
+    }
 }

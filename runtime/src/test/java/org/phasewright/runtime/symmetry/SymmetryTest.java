@@ -224,6 +224,18 @@ class SymmetryTest {
     }
 
     @Test
+    void aMissingImageIsReported() {
+        // Lorenz (1963): with C+ = (6√2, 6√2, 27) an equilibrium, so is its image C- under the rotation; a list
+        // holding only the origin and C+ must be incomplete.
+        double c = Math.sqrt(8.0 / 3 * 27);
+        SymmetryReport report = SymmetryAnalysis.analyse(List.of(map(rotation(), 3)), List.of("O", "C+"),
+                List.of(new double[] { 0, 0, 0 }, new double[] { c, c, 27 }), List.of("x", "y", "z"));
+        assertEquals(List.of("rotation: O"), report.equilibria().get(0).images());
+        assertEquals(List.of("rotation: " + SymmetryAnalysis.MISSING), report.equilibria().get(1).images());
+        assertTrue(report.orbitSentences().isEmpty());
+    }
+
+    @Test
     void swapFixesTheDiagonal() {
         // Fix of the exchange of two states is the diagonal x = y (Golubitsky, Stewart & Schaeffer vol. II,
         // ch. XIII §2: Fix(Σ) is the set of points every element of Σ leaves in place).

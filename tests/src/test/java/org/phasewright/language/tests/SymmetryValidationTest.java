@@ -62,6 +62,10 @@ class SymmetryValidationTest {
         assertEquals(3, issue.getLineNumber()); // on the model name
         assertEquals("symmetry s1: x -> -x, y -> -y", issue.getData()[0]);
         assertTrue(issue.getMessage().contains("`symmetry s1: x -> -x, y -> -y`"), issue.getMessage());
+        // The declaration is ready to insert: with it the model is clean and the symmetry verified.
+        String declared = text + issue.getData()[0] + "\n";
+        assertTrue(withCode(declared, IssueCodes.SYMMETRY_DISCOVERED).isEmpty());
+        assertEquals(1, withCode(declared, IssueCodes.SYMMETRY_VERIFIED).size());
     }
 
     @Test

@@ -1,0 +1,427 @@
+package org.phasewright.runtime.continuation;
+
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.Deque;
+import java.util.List;
+import java.util.Locale;
+import java.util.function.BooleanSupplier;
+
+import org.phasewright.runtime.compile.VectorField;
+import org.phasewright.runtime.equilibria.LinearStability;
+
+/**
+ * Pseudo-arclength continuation of equilibria f(u; p(λ)) = 0 for λ between two values (Keller 1977; Kuznetsov,
+ * Elements of Applied Bifurcation Theory, 3rd ed., §10.2): Euler predictor along the unit tangent, Newton corrector
+ * in the hyperplane orthogonal to it, step length adapted to Newton's effort and to how fast the tangent turns, so
+ * folds are passed without special treatment. Between consecutive points three test functions are watched:
+ * <ul>
+ * <li>fold: the λ-component of the tangent changes sign;</li>
+ * <li>branch point: det [f_u f_λ; tᵀ] changes sign (it keeps its sign through a fold);</li>
+ * <li>Hopf: the real part of the complex eigenvalue pair nearest the imaginary axis changes sign (real pairs
+ * ±μ, the neutral saddles that the bialternate product also flags, never count).</li>
+ * </ul>
+ * Each is located by the Illinois variant of regula falsi on the arclength, correcting onto the curve at every
+ * trial. At branch points the other branch is followed in both directions from the second tangent.
+ * Not thread-safe.
+ */
+public final class BranchFollower {
+    private static final int LOCATE_ITERATIONS = 60;
+
+    private final AugmentedSystem system;
+    private final Corrector corrector;
+    private final int n;
+    private final double from, to, lo, hi;
+    private final ContinuationSettings settings;
+    private final long deadlineNanos;
+    private final BooleanSupplier cancelled;
+    private final double hMax, hMin;
+    private final double[] jac;
+
+    private final List<Branch> branches = new ArrayList<>();
+    private final List<SpecialPoint> specials = new ArrayList<>();
+    private final List<double[]> branchPointsSeen = new ArrayList<>();
+    private final Deque<Seed> seeds = new ArrayDeque<>();
+    private long corrections;
+    private ContinuationOutcome.Ending ending = ContinuationOutcome.Ending.COMPLETED;
+
+    /** A place to start a branch: a point on it, the direction to go, and where it came from. */
+    private record Seed(double[] x, double[] direction, String origin) {
+    }
+
+    /** Test-function values at one point; hopf is NaN when there is no complex pair. */
+    private record Tests(double fold, double branch, double hopf, double frequency) {
+    }
+
+    /**
+     * @param parameterCount length of the full parameter vector
+     * @param deadlineNanos  {@link System#nanoTime()} at which to stop, or {@link Long#MAX_VALUE}
+     */
+    public BranchFollower(VectorField field, ParameterVector parameters, int parameterCount, double from, double to,
+            ContinuationSettings settings, long deadlineNanos, BooleanSupplier cancelled) {
+        this.system = new AugmentedSystem(field, parameters, parameterCount);
+        this.corrector = new Corrector(system);
+        this.n = field.dimension();
+        this.from = from;
+        this.to = to;
+        this.lo = Math.min(from, to);
+        this.hi = Math.max(from, to);
+        this.settings = settings;
+        this.deadlineNanos = deadlineNanos;
+        this.cancelled = cancelled;
+        double width = Math.max(hi - lo, 1e-300);
+        this.hMax = settings.maxStepFraction() * width;
+        this.hMin = settings.minStepFraction() * Math.max(width, 1);
+        this.jac = new double[n * n];
+    }
+
+    /** Follows the branch through each of {@code equilibria} (states at λ = from), and the branches they meet. */
+    public ContinuationOutcome follow(List<double[]> equilibria) {
+        double[] towards = new double[n + 1];
+        towards[n] = Math.signum(to - from) == 0 ? 1 : Math.signum(to - from);
+        for (double[] u : equilibria) {
+            double[] x = new double[n + 1];
+            System.arraycopy(u, 0, x, 0, n);
+            x[n] = from;
+            seeds.add(new Seed(x, towards, "equilibrium at " + name() + " = " + number(from)));
+        }
+        while (!seeds.isEmpty() && ending == ContinuationOutcome.Ending.COMPLETED) {
+            Seed seed = seeds.poll();
+            if (covered(seed.x())) {
+                continue;
+            }
+            if (branches.size() >= settings.maxBranches()) {
+                ending = ContinuationOutcome.Ending.WORK_LIMIT;
+                break;
+            }
+            trace(seed);
+        }
+        return new ContinuationOutcome(name(), from, to, ending, branches, specials, corrections);
+    }
+
+    private String name() {
+        return system.parameters().name();
+    }
+
+    private void trace(Seed seed) {
+        int number = branches.size() + 1;
+        List<ContinuationPoint> points = new ArrayList<>();
+        double[] x = seed.x().clone();
+        double[] t = corrector.tangent(x, seed.direction());
+        if (t == null) {
+            points.add(point(x, null));
+            branches.add(new Branch(number, seed.origin(), points, "no tangent at the start"));
+            return;
+        }
+        points.add(point(x, null));
+        Tests tests = tests(x, t);
+        double h = hMax / 4;
+        double[] first = x.clone();
+        double[] predicted = new double[n + 1];
+        double[] next = new double[n + 1];
+        String end;
+        while (true) {
+            if (cancelled.getAsBoolean()) {
+                ending = ContinuationOutcome.Ending.CANCELLED;
+                end = "cancelled";
+                break;
+            }
+            if (deadlineNanos != Long.MAX_VALUE && System.nanoTime() - deadlineNanos > 0) {
+                ending = ContinuationOutcome.Ending.TIME_LIMIT;
+                end = "wall-time limit";
+                break;
+            }
+            if (points.size() >= settings.maxPointsPerBranch()) {
+                ending = ContinuationOutcome.Ending.WORK_LIMIT;
+                end = "point limit";
+                break;
+            }
+            for (int i = 0; i <= n; i++) {
+                predicted[i] = x[i] + h * t[i];
+            }
+            boolean ok = corrector.correct(predicted, t, next);
+            corrections++;
+            int effort = corrector.iterations;
+            double[] tNext = ok ? corrector.tangent(next, t) : null;
+            double turn = tNext == null ? -1 : Corrector.dot(t, tNext);
+            if (tNext == null || (turn < settings.minTangentCosine() && h > 2 * hMin)) {
+                h /= 2;
+                if (h < hMin) {
+                    end = "step size too small (the branch may end in a singularity)";
+                    break;
+                }
+                continue;
+            }
+            Tests nextTests = tests(next, tNext);
+            boolean outside = next[n] < lo || next[n] > hi;
+            for (SpecialPoint.Kind kind : changes(tests, nextTests)) {
+                locate(kind, x, t, h, tests, nextTests, number, points);
+            }
+            if (outside) {
+                double[] boundary = boundary(x, next);
+                if (boundary != null) {
+                    points.add(point(boundary, null));
+                }
+                end = "reached " + name() + " = " + number(next[n] > hi ? hi : lo);
+                break;
+            }
+            points.add(point(next, null));
+            if (maxAbs(next, n) > settings.blowUpBound()) {
+                end = "unbounded (|state| above " + number(settings.blowUpBound()) + ")";
+                break;
+            }
+            if (points.size() > 5 && distance(next, first) < h / 2) {
+                points.add(point(first, null));
+                end = "closed loop";
+                break;
+            }
+            System.arraycopy(next, 0, x, 0, n + 1);
+            t = tNext;
+            tests = nextTests;
+            if (effort <= 3 && turn > 0.99) {
+                h = Math.min(hMax, 1.5 * h);
+            } else if (effort > 5) {
+                h *= 0.7;
+            }
+        }
+        branches.add(new Branch(number, seed.origin(), points, end));
+    }
+
+    private List<SpecialPoint.Kind> changes(Tests a, Tests b) {
+        List<SpecialPoint.Kind> out = new ArrayList<>();
+        if (Math.signum(a.fold()) * Math.signum(b.fold()) < 0) {
+            out.add(SpecialPoint.Kind.FOLD);
+        }
+        if (Math.signum(a.branch()) * Math.signum(b.branch()) < 0) {
+            out.add(SpecialPoint.Kind.BRANCH_POINT);
+        }
+        if (Math.signum(a.hopf()) * Math.signum(b.hopf()) < 0) { // NaN (no complex pair) never counts
+            out.add(SpecialPoint.Kind.HOPF);
+        }
+        return out;
+    }
+
+    /**
+     * Regula falsi (Illinois) for the zero of one test function on the arclength s in (0, h) from x along t.
+     * The located point is recorded, in arclength order, with the points of the branch.
+     */
+    private void locate(SpecialPoint.Kind kind, double[] x, double[] t, double h, Tests at0, Tests atH, int branch,
+            List<ContinuationPoint> points) {
+        double a = 0, b = h;
+        double fa = value(kind, at0), fb = value(kind, atH);
+        double[] predicted = new double[n + 1];
+        double[] best = null;
+        double[] bestTangent = null;
+        Tests bestTests = null;
+        int side = 0;
+        for (int k = 0; k < LOCATE_ITERATIONS; k++) {
+            double s = b - fb * (b - a) / (fb - fa);
+            if (!(s > Math.min(a, b) && s < Math.max(a, b))) {
+                s = (a + b) / 2;
+            }
+            double[] y = new double[n + 1];
+            boolean corrected = false;
+            // exactly at a branch point the bordered matrix is singular (regula falsi hits it at once when the test
+            // function is linear), so a failed correction is retried a hair to one side
+            for (int attempt = 0; attempt < 3 && !corrected; attempt++) {
+                double trial = s + attempt * 1e-9 * (b - a);
+                for (int i = 0; i <= n; i++) {
+                    predicted[i] = x[i] + trial * t[i];
+                }
+                corrections++;
+                corrected = corrector.correct(predicted, t, y);
+                if (corrected) {
+                    s = trial;
+                }
+            }
+            if (!corrected) {
+                break;
+            }
+            double[] ty = corrector.tangent(y, t);
+            if (ty == null) {
+                break;
+            }
+            Tests ts = tests(y, ty);
+            double fs = value(kind, ts);
+            best = y;
+            bestTangent = ty;
+            bestTests = ts;
+            if (fs == 0 || Math.abs(b - a) <= 1e-13 * (1 + maxAbs(y, n + 1))) {
+                break;
+            }
+            if (Math.signum(fs) == Math.signum(fb)) {
+                b = s;
+                fb = fs;
+                if (side == -1) {
+                    fa /= 2;
+                }
+                side = -1;
+            } else {
+                a = b;
+                fa = fb;
+                b = s;
+                fb = fs;
+                side = 1;
+            }
+            if (Math.abs(b - a) <= 1e-13 * (1 + maxAbs(y, n + 1))) {
+                break;
+            }
+        }
+        if (best == null || best[n] < lo || best[n] > hi) {
+            return;
+        }
+        double[] u = java.util.Arrays.copyOf(best, n);
+        double frequency = Double.NaN, l1 = Double.NaN;
+        if (kind == SpecialPoint.Kind.HOPF) {
+            frequency = bestTests.frequency();
+            l1 = FirstLyapunovCoefficient.at(system.field(), system.parameters().at(best[n]), u, frequency);
+        }
+        specials.add(new SpecialPoint(kind, branch, best[n], u, frequency, l1));
+        points.add(point(best, kind));
+        if (kind == SpecialPoint.Kind.BRANCH_POINT) {
+            switchBranches(best, bestTangent, branch);
+        }
+    }
+
+    /** Queues the other branch through a branch point, in both directions. */
+    private void switchBranches(double[] x, double[] t, int branch) {
+        for (double[] seen : branchPointsSeen) {
+            if (same(seen, x)) {
+                return;
+            }
+        }
+        branchPointsSeen.add(x.clone());
+        double[] t2 = corrector.secondTangent(x, t);
+        if (t2 == null) {
+            return;
+        }
+        double h = hMax / 10;
+        String origin = "branch point at " + name() + " = " + number(x[n]) + " on branch " + branch;
+        for (int sign = 1; sign >= -1; sign -= 2) {
+            double[] direction = new double[n + 1];
+            double[] predicted = new double[n + 1];
+            for (int i = 0; i <= n; i++) {
+                direction[i] = sign * t2[i];
+                predicted[i] = x[i] + h * direction[i];
+            }
+            double[] y = new double[n + 1];
+            corrections++;
+            if (!corrector.correct(predicted, direction, y)) {
+                continue;
+            }
+            // keep it only if it really left the first branch (not pulled back onto it)
+            double[] d = new double[n + 1];
+            for (int i = 0; i <= n; i++) {
+                d[i] = y[i] - x[i];
+            }
+            double along = Corrector.dot(d, t);
+            double off = Math.sqrt(Math.max(0, Corrector.dot(d, d) - along * along));
+            if (off > 0.3 * Corrector.norm(d) && y[n] >= lo && y[n] <= hi) {
+                seeds.add(new Seed(y, direction, origin));
+            }
+        }
+    }
+
+    /** The point where the branch meets λ = lo or hi, between an inside point and an outside one. */
+    private double[] boundary(double[] inside, double[] outside) {
+        double bound = outside[n] > hi ? hi : lo;
+        double theta = (bound - inside[n]) / (outside[n] - inside[n]);
+        double[] predicted = new double[n + 1];
+        for (int i = 0; i <= n; i++) {
+            predicted[i] = inside[i] + theta * (outside[i] - inside[i]);
+        }
+        predicted[n] = bound;
+        double[] direction = new double[n + 1];
+        direction[n] = 1; // fixes λ at the bound
+        double[] y = new double[n + 1];
+        corrections++;
+        return corrector.correct(predicted, direction, y) ? y : null;
+    }
+
+    private static double value(SpecialPoint.Kind kind, Tests tests) {
+        return switch (kind) {
+            case FOLD -> tests.fold();
+            case BRANCH_POINT -> tests.branch();
+            case HOPF -> tests.hopf();
+        };
+    }
+
+    private Tests tests(double[] x, double[] t) {
+        LinearStability s = stability(x);
+        double[] re = s.real(), im = s.imaginary();
+        double norm = 0;
+        for (double a : jac) {
+            norm += a * a;
+        }
+        double tolerance = settings.eigenTolerance() * Math.sqrt(norm);
+        double hopf = Double.NaN, frequency = Double.NaN;
+        for (int k = 0; k < re.length; k++) {
+            if (im[k] > tolerance && (Double.isNaN(hopf) || Math.abs(re[k]) < Math.abs(hopf))) {
+                hopf = re[k];
+                frequency = im[k];
+            }
+        }
+        return new Tests(t[n], corrector.branchTest(x, t), hopf, frequency);
+    }
+
+    private LinearStability stability(double[] x) {
+        system.stateJacobian(x, jac);
+        return LinearStability.of(jac, n, settings.eigenTolerance());
+    }
+
+    private ContinuationPoint point(double[] x, SpecialPoint.Kind special) {
+        LinearStability s = stability(x);
+        return new ContinuationPoint(x[n], java.util.Arrays.copyOf(x, n), s.real(), s.imaginary(),
+                s.classification(), special);
+    }
+
+    /** True when x lies on a branch already followed (a start reached by an earlier branch). */
+    private boolean covered(double[] x) {
+        for (Branch b : branches) {
+            for (ContinuationPoint p : b.points()) {
+                double[] y = java.util.Arrays.copyOf(p.state(), n + 1);
+                y[n] = p.parameter();
+                if (same(x, y)) {
+                    return true;
+                }
+            }
+        }
+        return false;
+    }
+
+    private boolean same(double[] a, double[] b) {
+        double scale = 1 + Math.max(maxAbs(a, n + 1), maxAbs(b, n + 1));
+        for (int i = 0; i <= n; i++) {
+            if (Math.abs(a[i] - b[i]) > 1e-6 * scale) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static double distance(double[] a, double[] b) {
+        double s = 0;
+        for (int i = 0; i < a.length; i++) {
+            s += (a[i] - b[i]) * (a[i] - b[i]);
+        }
+        return Math.sqrt(s);
+    }
+
+    private static double maxAbs(double[] a, int count) {
+        double m = 0;
+        for (int i = 0; i < count; i++) {
+            m = Math.max(m, Math.abs(a[i]));
+        }
+        return m;
+    }
+
+    static String number(double x) {
+        return String.format(Locale.ROOT, "%.6g", x).replaceAll("\\.?0+(e|$)", "$1");
+    }
+
+    /** Special points in the order of the branches and then of the parameter (for reports). */
+    static Comparator<SpecialPoint> order() {
+        return Comparator.comparingInt(SpecialPoint::branch).thenComparingDouble(SpecialPoint::parameter);
+    }
+}

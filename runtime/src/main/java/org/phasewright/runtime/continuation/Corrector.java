@@ -1,0 +1,168 @@
+package org.phasewright.runtime.continuation;
+
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.SingularValueDecomposition;
+
+/**
+ * The geometry of the solution curve H(x) = 0 in (u, λ) space: unit tangents from the bordered system
+ * [H_x; r^T] v = e_(n+1) (Keller's pseudo-arclength), Newton correction onto the curve in the hyperplane through a
+ * predicted point orthogonal to a direction, the branch-point test function det [H_x; t^T] (Kuznetsov, Elements of
+ * Applied Bifurcation Theory, 3rd ed., §10.2), and the second tangent at a branch point.
+ */
+final class Corrector {
+    static final int MAX_ITERATIONS = 10;
+    static final double STEP_TOLERANCE = 1e-10;
+
+    private final AugmentedSystem system;
+    private final int n;
+    private final double[] h, hx, rhs;
+    /** Newton iterations of the last {@link #correct} call. */
+    int iterations;
+
+    Corrector(AugmentedSystem system) {
+        this.system = system;
+        this.n = system.dimension();
+        this.h = new double[n];
+        this.hx = new double[n * (n + 1)];
+        this.rhs = new double[n + 1];
+    }
+
+    /** The unit tangent at x oriented like {@code reference} (t·reference > 0); null if it cannot be found. */
+    double[] tangent(double[] x, double[] reference) {
+        system.jacobian(x, hx);
+        SquareSolve lu = new SquareSolve(SquareSolve.bordered(hx, n, reference), n + 1);
+        double[] v;
+        if (lu.singular()) {
+            v = nullVectors(x, 1)[0];
+        } else {
+            v = new double[n + 1];
+            v[n] = 1;
+            lu.solve(v);
+        }
+        double norm = norm(v);
+        if (!(norm > 0) || !Double.isFinite(norm)) {
+            return null;
+        }
+        double sign = dot(v, reference) < 0 ? -1 : 1;
+        for (int i = 0; i <= n; i++) {
+            v[i] *= sign / norm;
+        }
+        return v;
+    }
+
+    /**
+     * Newton's method on H(X) = 0, direction·(X − predicted) = 0, from {@code predicted}; the result goes to
+     * {@code out}. False when it does not converge within {@link #MAX_ITERATIONS}.
+     */
+    boolean correct(double[] predicted, double[] direction, double[] out) {
+        System.arraycopy(predicted, 0, out, 0, n + 1);
+        iterations = 0;
+        while (iterations < MAX_ITERATIONS) {
+            iterations++;
+            system.value(out, h);
+            system.jacobian(out, hx);
+            SquareSolve lu = new SquareSolve(SquareSolve.bordered(hx, n, direction), n + 1);
+            if (lu.singular()) {
+                return false;
+            }
+            double constraint = 0;
+            for (int i = 0; i <= n; i++) {
+                constraint += direction[i] * (out[i] - predicted[i]);
+            }
+            for (int i = 0; i < n; i++) {
+                rhs[i] = -h[i];
+            }
+            rhs[n] = -constraint;
+            lu.solve(rhs);
+            double step = 0, size = 0;
+            for (int i = 0; i <= n; i++) {
+                out[i] += rhs[i];
+                step = Math.max(step, Math.abs(rhs[i]));
+                size = Math.max(size, Math.abs(out[i]));
+            }
+            if (!Double.isFinite(step)) {
+                return false;
+            }
+            if (step <= STEP_TOLERANCE * (1 + size)) {
+                system.value(out, h);
+                return finite(h);
+            }
+        }
+        return false;
+    }
+
+    /** det [H_x; t^T]: changes sign at a simple branch point, keeps its sign through a fold. */
+    double branchTest(double[] x, double[] t) {
+        system.jacobian(x, hx);
+        return new SquareSolve(SquareSolve.bordered(hx, n, t), n + 1).determinant();
+    }
+
+    /**
+     * At a branch point the kernel of H_x is two-dimensional: the unit vector of it orthogonal to the tangent
+     * {@code t} of the branch we came along is the tangent of the other branch (to first order).
+     */
+    double[] secondTangent(double[] x, double[] t) {
+        double[][] kernel = nullVectors(x, 2);
+        double[] best = null;
+        double bestNorm = 0;
+        for (double[] v : kernel) {
+            double c = dot(v, t);
+            double[] w = new double[n + 1];
+            for (int i = 0; i <= n; i++) {
+                w[i] = v[i] - c * t[i];
+            }
+            double norm = norm(w);
+            if (norm > bestNorm) {
+                bestNorm = norm;
+                best = w;
+            }
+        }
+        if (best == null || bestNorm < 1e-6) {
+            return null;
+        }
+        for (int i = 0; i <= n; i++) {
+            best[i] /= bestNorm;
+        }
+        return best;
+    }
+
+    /** The right singular vectors of H_x (padded to square with a zero row) for the smallest singular values. */
+    private double[][] nullVectors(double[] x, int count) {
+        system.jacobian(x, hx);
+        double[][] a = new double[n + 1][n + 1];
+        for (int i = 0; i < n; i++) {
+            System.arraycopy(hx, i * (n + 1), a[i], 0, n + 1);
+        }
+        SingularValueDecomposition svd = new SingularValueDecomposition(new Array2DRowRealMatrix(a, false));
+        double[][] v = svd.getV().getData();
+        double[][] out = new double[count][n + 1];
+        for (int k = 0; k < count; k++) {
+            int column = n - k; // singular values come in decreasing order
+            for (int i = 0; i <= n; i++) {
+                out[k][i] = v[i][column];
+            }
+        }
+        return out;
+    }
+
+    static double dot(double[] a, double[] b) {
+        double s = 0;
+        for (int i = 0; i < a.length; i++) {
+            s += a[i] * b[i];
+        }
+        return s;
+    }
+
+    static double norm(double[] a) {
+        return Math.sqrt(dot(a, a));
+    }
+
+    private static boolean finite(double[] a) {
+        for (double v : a) {
+            if (!Double.isFinite(v)) {
+                return false;
+            }
+        }
+        return true;
+    }
+}

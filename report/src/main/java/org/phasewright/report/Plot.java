@@ -8,7 +8,7 @@ import org.jfree.chart.JFreeChart;
  * One plot of a report.
  *
  * @param stem     file name without extension; the plot is written as stem.svg and stem.png
- * @param kind     time-series, phase-projection, equilibria, section, lyapunov or bifurcation
+ * @param kind     time-series, phase-projection, equilibria, section, lyapunov, bifurcation or orbit-diagram
  * @param title    the chart's title
  * @param caption  a sentence for the HTML report
  * @param series   names of the series drawn

@@ -15,6 +15,7 @@ import org.phasewright.runtime.study.EquilibriumResult;
 import org.phasewright.runtime.study.LyapunovResult;
 import org.phasewright.runtime.study.SectionResult;
 import org.phasewright.runtime.study.SimulationResult;
+import org.phasewright.runtime.study.SweepResult;
 import org.phasewright.runtime.study.StudyResult;
 import org.phasewright.runtime.study.Trajectory;
 
@@ -156,6 +157,11 @@ final class ResultsJson {
                     j.field("branches", c.continuation().branches().size())
                             .field("points", c.continuation().pointCount())
                             .field("specialPoints", c.continuation().specialPoints().size());
+                }
+            }
+            case SweepResult w -> {
+                if (w.sweep() != null) {
+                    j.field("parameterValues", w.sweep().columns().size()).field("threads", w.sweep().threads());
                 }
             }
         }

@@ -17,6 +17,7 @@ import org.phasewright.runtime.study.EquilibriumResult;
 import org.phasewright.runtime.study.LyapunovResult;
 import org.phasewright.runtime.study.SectionResult;
 import org.phasewright.runtime.study.SimulationResult;
+import org.phasewright.runtime.study.SweepResult;
 
 /** The settings of an analysis as the report shows them: from the result, and from the declaration when known. */
 final class Settings {
@@ -30,6 +31,7 @@ final class Settings {
             case SectionResult x -> "section";
             case LyapunovResult l -> "lyapunov";
             case ContinuationResult c -> "continuation";
+            case SweepResult w -> "sweep";
         };
     }
 
@@ -40,6 +42,7 @@ final class Settings {
             case SectionResult x -> "Poincaré section";
             case LyapunovResult l -> "Lyapunov exponents";
             case ContinuationResult c -> "Continuation of equilibria";
+            case SweepResult w -> "Orbit diagram";
         };
     }
 
@@ -90,6 +93,15 @@ final class Settings {
                     m.put("from", c.continuation().from());
                     m.put("to", c.continuation().to());
                     m.put("method", "pseudo-arclength continuation with fold, Hopf and branch-point test functions");
+                }
+            }
+            case SweepResult w -> {
+                if (w.sweep() != null) {
+                    m.put("parameter", w.sweep().parameterName());
+                    m.put("from", w.sweep().from());
+                    m.put("to", w.sweep().to());
+                    m.put("endTime", w.sweep().endTime());
+                    m.put("method", "local maxima after the first half of each run (Dormand–Prince 5(4))");
                 }
             }
         }

@@ -13,6 +13,7 @@ import org.phasewright.runtime.study.EquilibriumResult;
 import org.phasewright.runtime.study.LyapunovResult;
 import org.phasewright.runtime.study.SectionResult;
 import org.phasewright.runtime.study.SimulationResult;
+import org.phasewright.runtime.study.SweepResult;
 import org.phasewright.runtime.study.StudyResult;
 import org.phasewright.runtime.study.Trajectory;
 
@@ -30,7 +31,7 @@ final class StudyPlots {
         String head = study.modelName() + " · " + study.studyName();
         String time = timeLabel(study, context.model());
         List<Plot> plots = new ArrayList<>();
-        int simulation = 0, section = 0, lyapunov = 0, continuation = 0;
+        int simulation = 0, section = 0, lyapunov = 0, continuation = 0, sweep = 0;
         boolean projected = false;
         List<AnalysisResult> results = study.results();
         for (int a = 0; a < results.size(); a++) {
@@ -85,6 +86,20 @@ final class StudyPlots {
                             chart.getTitle().getText(), "Running estimates of each exponent; converged estimates "
                                     + "level off.", Charts.seriesNames(chart), a, chart));
                 }
+                case SweepResult w -> {
+                    if (w.sweep() == null || w.sweep().columns().isEmpty()) {
+                        break;
+                    }
+                    sweep++;
+                    int state = OrbitDiagramChart.widestState(w.sweep());
+                    var chart = OrbitDiagramChart.chart(w.sweep(), state, w.sweep().parameterName(),
+                            labels(study, context.model()).get(state), head + ": orbit diagram in "
+                                    + w.sweep().parameterName(), w.message());
+                    plots.add(new Plot("orbit-diagram" + (sweep > 1 ? "-" + sweep : ""), "orbit-diagram",
+                            chart.getTitle().getText(), "Local maxima of " + study.stateNames().get(state)
+                                    + " after transients, for each value of " + w.sweep().parameterName() + ".",
+                            Charts.seriesNames(chart), a, chart));
+                }
                 case EquilibriumResult e -> {
                     // Marked on the phase projections; drawn alone below when the study has no trajectory.
                 }
@@ -97,8 +112,8 @@ final class StudyPlots {
                     String parameter = c.continuation().parameterName();
                     var chart = BifurcationDiagram.chart(c, state, parameter,
                             labels(study, context.model()).get(state), head + ": bifurcation diagram in " + parameter,
-                            c.continuation().branches().size() + " branches of equilibria, "
-                                    + c.cycles().size() + " families of periodic orbits");
+                            count(c.continuation().branches().size(), "branch", "branches") + " of equilibria, "
+                                    + count(c.cycles().size(), "family", "families") + " of periodic orbits");
                     plots.add(new Plot("bifurcation" + (continuation > 1 ? "-" + continuation : ""),
                             "bifurcation", chart.getTitle().getText(), study.stateNames().get(state)
                                     + " against " + parameter + " on every branch; solid stable, dashed unstable,"
@@ -185,6 +200,10 @@ final class StudyPlots {
             }
         }
         return new int[] {Math.min(first, second), Math.max(first, second)};
+    }
+
+    private static String count(int n, String one, String many) {
+        return n + " " + (n == 1 ? one : many);
     }
 
     static List<String> labels(StudyResult study, DynamicalModel model) {

@@ -51,6 +51,47 @@ class ContinuationCommandLineTest {
         String json = Files.readString(dir.resolve("out/branches/branches.json"));
         assertTrue(json.contains("\"kind\": \"Hopf\""), json);
         assertTrue(json.contains("\"firstLyapunovCoefficient\": "), json);
+        // The cycles born there: their period tends to 2π/ω = 2π at the Hopf point (Kuznetsov, Elements of Applied
+        // Bifurcation Theory, Theorem 3.3), and they are stable since the bifurcation is supercritical.
+        List<String> cycles = Files.readAllLines(dir.resolve("out/branches/cycles.csv"));
+        assertEquals("family,point,b,period,x,y,min_x,min_y,max_x,max_y,stable,largest_multiplier,special",
+                cycles.get(0));
+        String[] orbit = cycles.get(1).split(",");
+        assertEquals(2 * Math.PI, Double.parseDouble(orbit[3]), 1e-2);
+        assertEquals("true", orbit[10]);
+        assertTrue(run.out().contains("supercritical"), run.out());
+    }
+
+    @Test
+    void sweepRecordsTheMaximaOfTheHopfCycle() throws Exception {
+        Path model = dir.resolve("hopf.phase");
+        Files.writeString(model, """
+                model hopf
+                param mu = 0.5
+                state x = 0.1
+                state y = 0
+                rate x = mu*x - y - x*(x^2 + y^2)
+                rate y = x + mu*y - y*(x^2 + y^2)
+                study diagram {
+                  sweep mu from 0.25 to 1 steps 4 until t = 120
+                }
+                """);
+        CommandLine run = CommandLine.run("run", model.toString(), "--out", dir.resolve("out").toString());
+        assertEquals(0, run.exitCode(), run.out() + run.err());
+        assertTrue(run.out().contains("Orbit diagram in mu from 0.25 to 1: COMPLETED - 4 of 4 parameter values"),
+                run.out());
+        List<String> csv = Files.readAllLines(dir.resolve("out/diagram/sweep.csv"));
+        assertEquals("mu,state,maximum", csv.get(0));
+        int checked = 0;
+        for (String line : csv.subList(1, csv.size())) {
+            String[] cells = line.split(",");
+            if (cells[1].equals("x")) {
+                // Strogatz, Nonlinear Dynamics and Chaos, §8.2: the stable cycle r = √μ (x peaks at √μ)
+                assertEquals(Math.sqrt(Double.parseDouble(cells[0])), Double.parseDouble(cells[2]), 1e-5, line);
+                checked++;
+            }
+        }
+        assertTrue(checked >= 4 * 9, checked + " maxima of x");
     }
 
     @Test

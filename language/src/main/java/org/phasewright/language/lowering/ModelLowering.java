@@ -22,6 +22,7 @@ import org.phasewright.language.phase.SimulateRequest;
 import org.phasewright.language.phase.StateDecl;
 import org.phasewright.language.phase.StateMap;
 import org.phasewright.language.phase.StudyDecl;
+import org.phasewright.language.phase.SweepRequest;
 import org.phasewright.language.phase.Symbol;
 import org.phasewright.language.phase.SymmetryDecl;
 import org.phasewright.language.phase.TimeDecl;
@@ -37,6 +38,7 @@ import org.phasewright.runtime.model.Expr;
 import org.phasewright.runtime.model.IntegrationMethod;
 import org.phasewright.runtime.model.LyapunovExponents;
 import org.phasewright.runtime.model.Parameter;
+import org.phasewright.runtime.model.ParameterSweep;
 import org.phasewright.runtime.model.ParameterRange;
 import org.phasewright.runtime.model.Section;
 import org.phasewright.runtime.model.Simulation;
@@ -167,6 +169,8 @@ public final class ModelLowering {
                             lyapunov.getTolerance() == null ? null : expressions.lower(lyapunov.getTolerance())));
                 } else if (analysis instanceof FollowRequest follow) {
                     analyses.add(follow(model, follow, expressions));
+                } else if (analysis instanceof SweepRequest sweep) {
+                    analyses.add(sweep(model, sweep, expressions));
                 }
             }
             studies.add(new Study(decl.getName(), analyses));
@@ -183,6 +187,17 @@ public final class ModelLowering {
         }
         return new EquilibriumContinuation(new Variable(VariableKind.PARAMETER, index, follow.getParameter().getName()),
                 expressions.lower(follow.getStart()), expressions.lower(follow.getEnd()));
+    }
+
+    /** `sweep PARAM from A to B steps N until T = END`. */
+    private static ParameterSweep sweep(PhaseModel model, SweepRequest sweep, ExpressionLowering expressions) {
+        int index = PhaseModels.params(model).indexOf(sweep.getParameter());
+        if (index < 0) {
+            throw new LoweringException("sweep varies something that is not a param");
+        }
+        return new ParameterSweep(new Variable(VariableKind.PARAMETER, index, sweep.getParameter().getName()),
+                expressions.lower(sweep.getStart()), expressions.lower(sweep.getEnd()), sweep.getSteps(),
+                expressions.lower(sweep.getDuration()));
     }
 
     /** The surface is written as `left = right`; the runtime looks for zeros of left - right. */

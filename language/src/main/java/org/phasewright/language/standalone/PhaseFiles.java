@@ -20,6 +20,7 @@ import org.eclipse.xtext.validation.IResourceValidator;
 import org.eclipse.xtext.validation.Issue;
 import org.phasewright.language.PhaseStandaloneSetup;
 import org.phasewright.language.phase.PhaseModel;
+import org.phasewright.language.validation.ExpressionDepth;
 
 import com.google.inject.Injector;
 
@@ -61,18 +62,70 @@ public final class PhaseFiles {
         return check(shown, URI.createFileURI(file.toAbsolutePath().toString()), text);
     }
 
-    /** Checks text as if it were the file {@code shown}; {@code uri} must end in {@code .phase}. */
+    /** Stack of the thread that parses and validates: the generated parser recurses several frames per nesting level. */
+    static final long PARSER_STACK_BYTES = 256L << 20;
+
+    /**
+     * Checks text as if it were the file {@code shown}; {@code uri} must end in {@code .phase}. Runs on a thread with
+     * a large stack so that deeply nested text is reported by the validator's depth rule instead of overflowing the
+     * parser; a lone carriage return is read as a line break (the same length, so every offset stays valid; the
+     * parser library's line counting fails on text that ends in one).
+     */
     public CheckedModel check(String shown, URI uri, String text) {
+        String normalized = text.indexOf('\r') < 0 ? text : text.replaceAll("\r(?!\n)", "\n");
+        CheckedModel[] result = new CheckedModel[1];
+        Throwable[] failure = new Throwable[1];
+        Thread worker = new Thread(null, () -> {
+            try {
+                result[0] = checkHere(shown, uri, normalized);
+            } catch (RuntimeException | Error e) {
+                failure[0] = e;
+            }
+        }, "phase-check", PARSER_STACK_BYTES);
+        worker.start();
+        boolean interrupted = false;
+        while (true) {
+            try {
+                worker.join();
+                break;
+            } catch (InterruptedException e) {
+                interrupted = true;
+            }
+        }
+        if (interrupted) {
+            Thread.currentThread().interrupt();
+        }
+        if (failure[0] instanceof RuntimeException e) {
+            throw e;
+        }
+        if (failure[0] instanceof Error e) {
+            throw e;
+        }
+        return result[0];
+    }
+
+    private CheckedModel checkHere(String shown, URI uri, String text) {
         XtextResourceSet resourceSet = injector.getInstance(XtextResourceSet.class);
         XtextResource resource = (XtextResource) resourceSet.createResource(uri);
+        List<Issue> issues;
         try (InputStream in = new java.io.ByteArrayInputStream(text.getBytes(StandardCharsets.UTF_8))) {
             resource.load(in, Map.of(XtextResource.OPTION_ENCODING, "UTF-8"));
+            issues = injector.getInstance(IResourceValidator.class).validate(resource, CheckMode.ALL,
+                    CancelIndicator.NullImpl);
         } catch (IOException e) {
             return new CheckedModel(shown, null,
                     List.of(new Problem(Problem.Severity.ERROR, shown, 1, 1, "File cannot be parsed.", null)));
+        } catch (StackOverflowError | org.eclipse.xtext.parser.ParseException e) {
+            if (e instanceof org.eclipse.xtext.parser.ParseException && !(e.getCause() instanceof StackOverflowError)) {
+                throw e;
+            }
+            // Only absurd nesting gets here (thousands of levels): the validator reports depths above
+            // ExpressionDepth.MAX_DEPTH, but the parser itself is recursive.
+            return new CheckedModel(shown, null, List.of(new Problem(Problem.Severity.ERROR, shown, 1, 1,
+                    "The file is nested too deeply to be read (parentheses, operators or calls thousands of levels"
+                            + " deep); split long expressions into several `let` declarations.",
+                    ExpressionDepth.TOO_DEEP)));
         }
-        List<Issue> issues = injector.getInstance(IResourceValidator.class).validate(resource, CheckMode.ALL,
-                CancelIndicator.NullImpl);
         List<Problem> problems = new ArrayList<>();
         for (Issue issue : issues) {
             problems.add(toProblem(shown, issue));

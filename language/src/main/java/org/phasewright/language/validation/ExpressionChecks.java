@@ -17,6 +17,7 @@ import org.phasewright.language.phase.ParamDecl;
 import org.phasewright.language.phase.PhaseModel;
 import org.phasewright.language.phase.LyapunovRequest;
 import org.phasewright.language.phase.SimulateRequest;
+import org.phasewright.language.phase.SweepRequest;
 import org.phasewright.language.phase.StateDecl;
 import org.phasewright.language.phase.StateMap;
 import org.phasewright.language.phase.Symbol;
@@ -89,6 +90,9 @@ public class ExpressionChecks extends PhaseCheckBase {
         }
         if (owner instanceof FollowRequest) {
             return "A continuation bound";
+        }
+        if (owner instanceof SweepRequest) {
+            return "A sweep setting";
         }
         return null;
     }

@@ -12,6 +12,7 @@ import org.phasewright.language.phase.PhaseModel;
 import org.phasewright.language.phase.SectionRequest;
 import org.phasewright.language.phase.SimulateRequest;
 import org.phasewright.language.phase.StudyDecl;
+import org.phasewright.language.phase.SweepRequest;
 
 /** Study requests name the model's time variable and give a start value for every state. */
 public class StudyChecks extends PhaseCheckBase {
@@ -51,6 +52,17 @@ public class StudyChecks extends PhaseCheckBase {
                     + PhaseModels.kindWord(follow.getParameter()) + ".", follow, PHASE.getFollowRequest_Parameter(),
                     IssueCodes.NOT_CONSTANT);
         }
+    }
+
+    @Check
+    public void sweepVariesAParam(SweepRequest sweep) {
+        if (sweep.getParameter() != null && !sweep.getParameter().eIsProxy()
+                && !(sweep.getParameter() instanceof ParamDecl)) {
+            error("`sweep NAME from ...` varies a param; '" + sweep.getParameter().getName() + "' is a "
+                    + PhaseModels.kindWord(sweep.getParameter()) + ".", sweep, PHASE.getSweepRequest_Parameter(),
+                    IssueCodes.NOT_CONSTANT);
+        }
+        timeName(sweep, sweep.getTimeName(), PHASE.getSweepRequest_TimeName(), "sweep ... until ");
     }
 
     private void timeName(EObject request, String written, EStructuralFeature feature, String form) {

@@ -180,12 +180,24 @@ public final class BranchFollower {
             t = tNext;
             tests = nextTests;
             if (effort <= 3 && turn > 0.99) {
-                h = Math.min(hMax, 1.5 * h);
+                h = Math.min(cap(x, t), 1.5 * h);
             } else if (effort > 5) {
                 h *= 0.7;
             }
         }
         branches.add(new Branch(number, seed.origin(), points, end));
+    }
+
+    /**
+     * The largest step at x: a fraction of the interval width or of the state's size, whichever is larger (a branch
+     * at large state values is long in arclength), but never moving λ by more than a few such fractions of the
+     * width in one step, so no special point is stepped over unseen.
+     */
+    private double cap(double[] x, double[] t) {
+        double width = hMax / settings.maxStepFraction();
+        double size = settings.maxStepFraction() * Math.max(width, maxAbs(x, n));
+        double alongLambda = Math.abs(t[n]) > 0 ? 2.5 * hMax / Math.abs(t[n]) : Double.POSITIVE_INFINITY;
+        return Math.min(size, alongLambda);
     }
 
     private List<SpecialPoint.Kind> changes(Tests a, Tests b) {

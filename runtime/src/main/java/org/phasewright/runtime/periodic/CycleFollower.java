@@ -21,7 +21,7 @@ import org.phasewright.runtime.integrate.IntegratorSettings;
  * Bifurcation and Stability Analysis, 3rd ed., ch. 7). The first orbit is predicted from the Hopf point along the
  * real critical eigenspace with period 2π/ω; later orbits are predicted along the secant of the last two.
  * Floquet multipliers are the eigenvalues of the monodromy matrix; a period doubling is a sign change of det(M + I)
- * (a multiplier crossing −1), placed by linear interpolation of it along the step and correction onto the family;
+ * (a multiplier crossing −1), placed by regula falsi on it along the step, correcting onto the family each time;
  * a fold of cycles is a sign change of the λ-component of the secant, placed by a golden-section search for the
  * extremum of λ. Not thread-safe.
  */
@@ -89,16 +89,17 @@ public final class CycleFollower {
         if (next == null) {
             return new CycleBranch(number, hopfParameter, points, "no periodic orbit found near the Hopf point");
         }
-        double[] tangent = tangent(next, t);
-        if (tangent == null) {
-            return new CycleBranch(number, hopfParameter, points, "no tangent at the first orbit");
+        double[] direction = secant(x, next); // from the Hopf point, seen as an orbit of amplitude zero
+        if (direction == null) {
+            return new CycleBranch(number, hopfParameter, points, "no direction at the first orbit");
         }
         x = next;
-        t = tangent;
+        t = direction;
         PeriodMap.Shot shot = lastShot;
         points.add(point(x, shot, null));
         double pd = doublingTest(shot);
         double previousStep = 0; // no earlier orbit yet
+        boolean secantOfOrbits = false;
         String end;
         while (true) {
             if (cancelled.getAsBoolean()) {
@@ -116,7 +117,9 @@ public final class CycleFollower {
             double[] predicted = add(x, h, t);
             double[] y = correct(predicted, t, Arrays.copyOf(x, n), x[n + 1]);
             double[] ty = y == null ? null : secant(x, y);
-            if (ty == null || dot(ty, t) < 0.9) {
+            // the first direction comes from the Hopf point, not from two orbits: it may differ from the family's
+            // direction by the slant of the phase plane, so only later directions are held to the turning limit
+            if (ty == null || (secantOfOrbits && dot(ty, t) < 0.9)) {
                 h /= 2;
                 if (h < 1e-8 * hMax) {
                     end = "step size too small";
@@ -143,20 +146,66 @@ public final class CycleFollower {
                 break;
             }
             previousStep = distance(x, y);
+            secantOfOrbits = true;
             x = y;
             t = ty;
             pd = pdNext;
-            h = Math.min(hMax, h * 1.4);
+            h = Math.min(cap(x, t), h * 1.4);
         }
         return new CycleBranch(number, hopfParameter, points, end);
     }
 
+    /** As for equilibria: a fraction of the width or of the orbit's size, with λ moving a few fractions at most. */
+    private double cap(double[] x, double[] t) {
+        double size = 0;
+        for (int i = 0; i < n; i++) {
+            size = Math.max(size, Math.abs(x[i]));
+        }
+        double width = hMax / settings.maxStepFraction();
+        double cap = settings.maxStepFraction() * Math.max(width, size);
+        double lambda = Math.abs(t[n + 1]);
+        return lambda > 0 ? Math.min(cap, 2.5 * hMax / lambda) : cap;
+    }
+
+    /** Regula falsi (Illinois) on det(M + I) along the step, correcting onto the family at every trial. */
     private void locate(List<CyclePoint> points, double[] x, double[] t, double h, double f0, double f1,
             CycleBranch.Special kind) {
-        double s = h * f0 / (f0 - f1);
-        double[] y = correct(add(x, s, t), t, Arrays.copyOf(x, n), x[n + 1]);
-        if (y != null && y[n + 1] >= lo && y[n + 1] <= hi) {
-            points.add(point(y, lastShot, kind));
+        double a = 0, b = h, fa = f0, fb = f1;
+        double[] best = null;
+        PeriodMap.Shot bestShot = null;
+        int side = 0;
+        for (int k = 0; k < 40 && Math.abs(b - a) > 1e-12 * (1 + h); k++) {
+            double s = b - fb * (b - a) / (fb - fa);
+            if (!(s > Math.min(a, b) && s < Math.max(a, b))) {
+                s = (a + b) / 2;
+            }
+            double[] y = correct(add(x, s, t), t, Arrays.copyOf(x, n), x[n + 1]);
+            if (y == null) {
+                break;
+            }
+            best = y;
+            bestShot = lastShot;
+            double fs = doublingTest(lastShot);
+            if (fs == 0) {
+                break;
+            }
+            if (Math.signum(fs) == Math.signum(fb)) {
+                b = s;
+                fb = fs;
+                if (side == -1) {
+                    fa /= 2;
+                }
+                side = -1;
+            } else {
+                a = b;
+                fa = fb;
+                b = s;
+                fb = fs;
+                side = 1;
+            }
+        }
+        if (best != null && best[n + 1] >= lo && best[n + 1] <= hi) {
+            points.add(point(best, bestShot, kind));
         }
     }
 
@@ -273,34 +322,8 @@ public final class CycleFollower {
         }
     }
 
-    /** Unit tangent at x (from the last shot, taken there) oriented like {@code reference}. */
-    private double[] tangent(double[] x, double[] reference) {
-        double[] fRef = new double[n];
-        parameters.fill(x[n + 1], p);
-        field.rates(0.0, x, p, fRef);
-        double[] a = new double[m * m];
-        jacobianRows(x, lastShot, fRef, a);
-        System.arraycopy(reference, 0, a, (n + 1) * m, m);
-        SquareSolve lu = new SquareSolve(a, m);
-        if (lu.singular()) {
-            return null;
-        }
-        double[] v = new double[m];
-        v[m - 1] = 1;
-        lu.solve(v);
-        double norm = Math.sqrt(dot(v, v));
-        if (!(norm > 0) || !Double.isFinite(norm)) {
-            return null;
-        }
-        double sign = dot(v, reference) < 0 ? -1 : 1;
-        for (int i = 0; i < m; i++) {
-            v[i] *= sign / norm;
-        }
-        return v;
-    }
-
     /**
-     * The unit secant from x to y. It serves as the next direction: the tangent from the bordered system proved
+     * The unit secant from x to y. It serves as the next direction: a tangent from the bordered system proved
      * unreliable on the period map (near a Hopf point M − I is nearly singular in two directions), while the secant
      * of two converged orbits always lies along the family.
      */

@@ -12,14 +12,15 @@ import org.phasewright.runtime.study.LyapunovResult;
 import org.phasewright.runtime.study.SectionResult;
 import org.phasewright.runtime.study.SimulationResult;
 import org.phasewright.runtime.study.StudyResult;
+import org.phasewright.runtime.study.SweepResult;
 
 /**
  * Writes every file of a study result into a folder: summary.txt, trajectory.csv for each simulation that produced
  * samples, equilibria.csv and equilibria.json for each search, section.csv (the crossings, same columns as a
  * trajectory) for each section, lyapunov.csv (running estimates) for each Lyapunov request,
- * branches.csv and branches.json for each continuation (and cycles.csv when it
- * followed periodic orbits from Hopf points). The second simulation or search of a study gets
- * files named trajectory-2.csv, equilibria-2.csv, and so on.
+ * branches.csv and branches.json for each continuation (and cycles.csv when it followed periodic orbits from Hopf
+ * points), sweep.csv (local maxima) for each orbit diagram. The second simulation or search of a study gets files
+ * named trajectory-2.csv, equilibria-2.csv, and so on.
  */
 public final class ReportWriter {
     private ReportWriter() {
@@ -28,7 +29,7 @@ public final class ReportWriter {
     /** @return the files written, in the order of the analyses, summary last */
     public static List<Path> writeAll(StudyResult study, Path folder) throws IOException {
         List<Path> written = new ArrayList<>();
-        int simulation = 0, search = 0, section = 0, lyapunov = 0, continuation = 0;
+        int simulation = 0, search = 0, section = 0, lyapunov = 0, continuation = 0, sweep = 0;
         for (AnalysisResult r : study.results()) {
             switch (r) {
                 case SimulationResult s -> {
@@ -79,6 +80,14 @@ public final class ReportWriter {
                                     study.stateNames(), c.cycles()));
                             written.add(cycles);
                         }
+                    }
+                }
+                case SweepResult w -> {
+                    sweep++;
+                    if (w.sweep() != null) {
+                        Path csv = folder.resolve(name("sweep", sweep, "csv"));
+                        AtomicFiles.write(csv, SweepCsv.render(study.stateNames(), w.sweep()));
+                        written.add(csv);
                     }
                 }
             }

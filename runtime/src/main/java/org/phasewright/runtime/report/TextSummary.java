@@ -12,6 +12,7 @@ import org.phasewright.runtime.study.LyapunovResult;
 import org.phasewright.runtime.study.SectionResult;
 import org.phasewright.runtime.study.SimulationResult;
 import org.phasewright.runtime.study.StudyResult;
+import org.phasewright.runtime.study.SweepResult;
 
 /** A plain-text account of a study for a terminal: outcomes, counts, final states and a table of equilibria. */
 public final class TextSummary {
@@ -40,6 +41,10 @@ public final class TextSummary {
                 case LyapunovResult l -> out.append("Lyapunov exponents: ").append(l.outcome()).append(" - ")
                         .append(l.message()).append('\n');
                 case ContinuationResult c -> ContinuationSummary.text(out, study, c);
+                case SweepResult w -> out.append("Orbit diagram").append(w.sweep() == null ? ""
+                        : " in " + w.sweep().parameterName() + " from " + Numbers.compact(w.sweep().from()) + " to "
+                                + Numbers.compact(w.sweep().to())).append(": ").append(w.outcome()).append(" - ")
+                        .append(w.message()).append('\n');
             }
         }
         return out.toString();

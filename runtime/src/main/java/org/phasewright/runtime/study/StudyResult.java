@@ -42,6 +42,10 @@ public record StudyResult(String modelName, String studyName, String timeName, L
                 .toList();
     }
 
+    public List<SweepResult> sweeps() {
+        return results.stream().filter(SweepResult.class::isInstance).map(SweepResult.class::cast).toList();
+    }
+
     /** The worst status of any analysis (COMPLETED for an empty study). */
     public Status status() {
         Status worst = Status.COMPLETED;

@@ -6,6 +6,7 @@ import java.util.List;
 import org.phasewright.runtime.compile.CompiledModel;
 import org.phasewright.runtime.model.Analysis;
 import org.phasewright.runtime.model.EquilibriumContinuation;
+import org.phasewright.runtime.model.ParameterSweep;
 import org.phasewright.runtime.model.EquilibriumSearch;
 import org.phasewright.runtime.model.LyapunovExponents;
 import org.phasewright.runtime.model.Section;
@@ -36,6 +37,7 @@ public final class StudyRunner {
                         case Section x -> SectionRunner.run(model, x, settings, budget);
                         case LyapunovExponents l -> LyapunovRunner.run(model, l, settings, budget);
                         case EquilibriumContinuation c -> ContinuationRunner.run(model, c, settings, budget);
+                        case ParameterSweep w -> SweepRunner.run(model, w, settings, budget);
                     };
                 } catch (RuntimeException e) { // a bug must not surface as a stack trace in a user's terminal
                     result = failed(analysis, "internal error: " + e);
@@ -65,6 +67,7 @@ public final class StudyRunner {
             case Section x -> new SectionResult(null, null, Double.NaN, Status.INCOMPLETE, why, message);
             case LyapunovExponents l -> new LyapunovResult(null, Double.NaN, Status.INCOMPLETE, why, message);
             case EquilibriumContinuation c -> new ContinuationResult(null, Status.INCOMPLETE, why, message);
+            case ParameterSweep w -> new SweepResult(null, Status.INCOMPLETE, why, message);
         };
     }
 
@@ -78,6 +81,7 @@ public final class StudyRunner {
             case LyapunovExponents l -> new LyapunovResult(null, Double.NaN, Status.FAILED, "INTERNAL_ERROR",
                     message);
             case EquilibriumContinuation c -> new ContinuationResult(null, Status.FAILED, "INTERNAL_ERROR", message);
+            case ParameterSweep w -> new SweepResult(null, Status.FAILED, "INTERNAL_ERROR", message);
         };
     }
 }

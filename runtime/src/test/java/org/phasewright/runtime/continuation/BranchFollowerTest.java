@@ -114,6 +114,24 @@ class BranchFollowerTest {
     }
 
     @Test
+    void parametersDefinedFromTheVariedOneFollowIt() {
+        // x' = k − x with k = 2a: the equilibrium is x = k = 2a for every a (closed form)
+        Variable x = state(0, "x");
+        DynamicalModel m = model("linear", List.of(stateVar("x", 0)),
+                List.of(parameter("a", c(0)), parameter("k", mul(c(2), param(0, "a")))), List.of(),
+                List.of(sub(param(1, "k"), x)));
+        ContinuationOutcome o = follow(m, 0, 0, 1, List.of(new double[] {0}));
+        assertEquals(1, o.branches().size(), o.message());
+        List<ContinuationPoint> points = o.branches().get(0).points();
+        assertEquals(1.0, points.get(points.size() - 1).parameter(), 1e-12);
+        for (ContinuationPoint p : points) {
+            assertEquals(2 * p.parameter(), p.state()[0], 1e-10);
+            assertTrue(p.stable()); // f'(x) = −1
+        }
+        assertTrue(o.specialPoints().isEmpty());
+    }
+
+    @Test
     void firstLyapunovCoefficientOfTheHopfNormalForm() {
         // x' = μx − ωy + s·x(x²+y²), y' = ωx + μy + s·y(x²+y²). By hand from Kuznetsov, Elements of Applied
         // Bifurcation Theory, 3rd ed., (3.20) with ⟨q,q⟩ = ⟨p,q⟩ = 1: q = p = (1, −i)/√2, B = 0 and

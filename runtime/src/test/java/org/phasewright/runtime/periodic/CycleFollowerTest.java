@@ -2,36 +2,20 @@ package org.phasewright.runtime.periodic;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.phasewright.runtime.TestModels.add;
-import static org.phasewright.runtime.TestModels.c;
-import static org.phasewright.runtime.TestModels.model;
-import static org.phasewright.runtime.TestModels.mul;
-import static org.phasewright.runtime.TestModels.param;
-import static org.phasewright.runtime.TestModels.parameter;
-import static org.phasewright.runtime.TestModels.pow;
-import static org.phasewright.runtime.TestModels.state;
-import static org.phasewright.runtime.TestModels.stateVar;
-import static org.phasewright.runtime.TestModels.sub;
 
 import java.util.List;
 
 import org.junit.jupiter.api.Test;
 import org.phasewright.runtime.compile.CompiledModel;
 import org.phasewright.runtime.compile.ModelCompiler;
+import org.phasewright.runtime.continuation.NormalForms;
 import org.phasewright.runtime.continuation.ParameterVector;
 import org.phasewright.runtime.model.DynamicalModel;
-import org.phasewright.runtime.model.Expr;
-import org.phasewright.runtime.model.Variable;
 
 class CycleFollowerTest {
 
-    /** ż = (μ + i)z + a z|z|² + b z|z|⁴ written in x, y (z = x + iy): r' = μr + a r³ + b r⁵, θ' = 1. */
     static DynamicalModel radial(double a, double b) {
-        Variable x = state(0, "x"), y = state(1, "y"), mu = param(0, "mu");
-        Expr r2 = add(pow(x, c(2)), pow(y, c(2)));
-        Expr g = add(mu, add(mul(c(a), r2), mul(c(b), pow(r2, c(2))))); // μ + a r² + b r⁴
-        return model("radial", List.of(stateVar("x", 0), stateVar("y", 0)), List.of(parameter("mu", c(0))),
-                List.of(), List.of(sub(mul(g, x), y), add(x, mul(g, y))));
+        return NormalForms.radial(a, b, 0);
     }
 
     static CycleBranch follow(DynamicalModel m, double from, double to) {
@@ -61,6 +45,26 @@ class CycleFollowerTest {
             assertTrue(p.stable());
         }
         assertTrue(b.specialPoints().isEmpty());
+    }
+
+    @Test
+    void periodDoublingWhereAMultiplierCrossesMinusOne() {
+        // Constructed so its Floquet multipliers are known in closed form: the Hopf cycle of radius √μ in (x, y)
+        // drives (w1, w2) by w' = [(μ − 1)I + 1.5·[[x, y], [y, −x]] + J/2] w. In the frame turning with half the
+        // phase, v = R(−θ/2)w obeys v' = diag(μ − 1 ± 1.5√μ) v, and after one period (θ advances by 2π) the frame
+        // has turned by π, so the multipliers of w are −exp(2π(μ − 1 ± 1.5√μ)). One crosses −1 where
+        // μ − 1 + 1.5√μ = 0, i.e. √μ = 1/2, μ = 1/4: a period doubling (derivation in this comment; closed form).
+        DynamicalModel m = NormalForms.halfTwist();
+        CompiledModel cm = ModelCompiler.compile(m);
+        ParameterVector pv = new ParameterVector(m, cm.parameters(), 0);
+        CycleBranch b = new CycleFollower(cm.field(), pv, 1, -0.2, 0.6, CycleSettings.DEFAULT, 1e12,
+                Long.MAX_VALUE, () -> false).follow(1, new double[4], 0.0, 1.0);
+        List<CyclePoint> pd = b.specialPoints().stream()
+                .filter(p -> p.special() == CycleBranch.Special.PERIOD_DOUBLING).toList();
+        assertEquals(1, pd.size(), b.ending());
+        assertEquals(0.25, pd.get(0).parameter(), 1e-7);
+        CyclePoint first = b.points().get(0), last = b.points().get(b.points().size() - 1);
+        assertTrue(first.stable() && !last.stable()); // the multiplier leaves the unit circle through −1
     }
 
     @Test

@@ -29,15 +29,26 @@ class CheckerFuzzTest {
         int runEvery = Integer.getInteger("phasewright.fuzz.runEvery", 6);
         long seed = Long.getLong("phasewright.fuzz.seed", 20261202L);
         PhaseTextFuzzer fuzzer = new PhaseTextFuzzer(seed, PhaseTextFuzzer.exampleTexts());
-        FuzzOracle oracle = new FuzzOracle(new PhaseFiles(), scratch);
+        FuzzOracle oracle = new FuzzOracle(new PhaseFiles(), scratch).listen();
         List<String> findings = new ArrayList<>();
         long start = System.nanoTime();
         int errorFree = 0;
+        long slowest = 0;
+        int slowestSize = 0;
         for (int i = 0; i < count; i++) {
             String text = fuzzer.next();
+            if (i % 5000 == 0 && i > 0) {
+                System.out.printf("checker fuzz: %d texts in %.1f s%n", i, (System.nanoTime() - start) / 1e9);
+            }
             boolean run = errorFree % runEvery == 0;
             int before = oracle.withErrors.get();
+            long t0 = System.nanoTime();
             List<String> wrong = oracle.judge(text, run, errorFree % (runEvery * 20) == 0);
+            long took = (System.nanoTime() - t0) / 1_000_000;
+            if (took > slowest) {
+                slowest = took;
+                slowestSize = text.length();
+            }
             if (oracle.withErrors.get() == before) {
                 errorFree++;
             }
@@ -46,8 +57,10 @@ class CheckerFuzzTest {
                 findings.add("text " + i + " (kept as " + kept + "): " + wrong.get(0));
             }
         }
+        oracle.stopListening();
         double seconds = (System.nanoTime() - start) / 1e9;
-        System.out.printf("checker fuzz: seed %d, %.1f s, %s%n", seed, seconds, oracle.tally());
+        System.out.printf("checker fuzz: seed %d, %.1f s, slowest text %d ms (%d chars), %s%n", seed, seconds,
+                slowest, slowestSize, oracle.tally());
         assertTrue(oracle.compiled.get() > 0, "the generator must produce runnable models: " + oracle.tally());
         assertTrue(findings.isEmpty(), findings.size() + " findings, first ones:\n"
                 + String.join("\n", findings.subList(0, Math.min(8, findings.size()))));

@@ -13,6 +13,10 @@ import java.util.Map;
 import java.util.TreeMap;
 import java.util.concurrent.atomic.AtomicInteger;
 
+import org.apache.log4j.AppenderSkeleton;
+import org.apache.log4j.Level;
+import org.apache.log4j.Logger;
+import org.apache.log4j.spi.LoggingEvent;
 import org.eclipse.emf.common.util.URI;
 import org.phasewright.language.lowering.LoweringException;
 import org.phasewright.language.lowering.ModelLowering;
@@ -59,8 +63,51 @@ final class FuzzOracle {
         this.scratch = scratch;
     }
 
+    /** Errors that libraries log instead of throwing (an exception swallowed by a validator, say) are findings too. */
+    private final List<String> logged = new ArrayList<>();
+    private final AppenderSkeleton listener = new AppenderSkeleton() {
+        @Override
+        protected void append(LoggingEvent event) {
+            if (event.getLevel().isGreaterOrEqual(Level.ERROR)) {
+                String thrown = event.getThrowableInformation() == null ? ""
+                        : " " + trace(event.getThrowableInformation().getThrowable());
+                synchronized (logged) {
+                    logged.add("logged " + event.getLoggerName() + ": " + event.getRenderedMessage() + thrown);
+                }
+            }
+        }
+
+        @Override
+        public void close() {
+        }
+
+        @Override
+        public boolean requiresLayout() {
+            return false;
+        }
+    };
+
+    /** Starts hearing errors logged through log4j (Xtext's logging); call once. */
+    FuzzOracle listen() {
+        Logger.getRootLogger().addAppender(listener);
+        return this;
+    }
+
+    void stopListening() {
+        Logger.getRootLogger().removeAppender(listener);
+    }
+
     /** @return what went wrong, empty when the text was handled properly */
     List<String> judge(String text, boolean run, boolean write) {
+        List<String> wrong = judgeQuietly(text, run, write);
+        synchronized (logged) {
+            wrong.addAll(logged);
+            logged.clear();
+        }
+        return wrong;
+    }
+
+    private List<String> judgeQuietly(String text, boolean run, boolean write) {
         texts.incrementAndGet();
         List<String> wrong = new ArrayList<>();
         CheckedModel checked;
@@ -71,8 +118,9 @@ final class FuzzOracle {
             return wrong;
         }
         problems.addAndGet(checked.problems().size());
+        int lines = 1 + count(text, '\n') + count(text, '\r') - text.split("\r\n", -1).length + 1; // \r\n counts once
         for (Problem p : checked.problems()) {
-            String bad = positionFault(text, p);
+            String bad = positionFault(text, lines, p);
             if (bad != null) {
                 wrong.add(bad + ": " + p);
             }
@@ -146,13 +194,11 @@ final class FuzzOracle {
     }
 
     /** Null when the problem's position lies inside the text (or just after its end). */
-    static String positionFault(String text, Problem p) {
+    static String positionFault(String text, int lines, Problem p) {
         if (p.line() < 1 || p.column() < 1) {
             return "position below 1";
         }
-        int lines = 1 + count(text, '\n');
-        int crLines = 1 + count(text, '\r');
-        if (p.line() > Math.max(lines, crLines)) {
+        if (p.line() > lines) {
             return "line " + p.line() + " beyond the " + lines + " lines of the text";
         }
         if (p.column() > text.length() + 1) {
@@ -164,7 +210,7 @@ final class FuzzOracle {
         return null;
     }
 
-    private static int count(String s, char c) {
+    static int count(String s, char c) {
         int n = 0;
         for (int i = 0; i < s.length(); i++) {
             if (s.charAt(i) == c) {
@@ -191,7 +237,7 @@ final class FuzzOracle {
         try {
             Files.createDirectories(folder);
             Path f = folder.resolve(name + ".phase");
-            Files.writeString(f, text, StandardCharsets.UTF_8);
+            Files.write(f, text.getBytes(StandardCharsets.UTF_8));
             return f;
         } catch (IOException e) {
             return null;

@@ -353,7 +353,7 @@ final class PhaseTextFuzzer {
 
     /** Wraps a token in many parentheses (or unary minuses, or one-argument calls). */
     String deepNesting(String core) {
-        int depth = random.nextInt(5) == 0 ? 2_000 + random.nextInt(20_000) : 20 + random.nextInt(400);
+        int depth = random.nextInt(40) == 0 ? 1_000 + random.nextInt(3_000) : 20 + random.nextInt(500);
         return nested(core, depth, random.nextInt(3));
     }
 
@@ -368,7 +368,7 @@ final class PhaseTextFuzzer {
     }
 
     String longChain(String core) {
-        int length = random.nextInt(5) == 0 ? 2_000 + random.nextInt(20_000) : 10 + random.nextInt(300);
+        int length = random.nextInt(40) == 0 ? 1_000 + random.nextInt(3_000) : 10 + random.nextInt(500);
         String op = List.of("^", "+", "*", "-", "/").get(random.nextInt(5));
         return chain(core, length, op);
     }

@@ -1,0 +1,137 @@
+package org.phasewright.runtime.sweep;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ForkJoinPool;
+import java.util.concurrent.Future;
+import java.util.function.BooleanSupplier;
+import java.util.function.DoubleConsumer;
+
+import org.phasewright.runtime.compile.CompiledModel;
+import org.phasewright.runtime.compile.VectorField;
+import org.phasewright.runtime.continuation.ParameterVector;
+import org.phasewright.runtime.integrate.CrossingLocator;
+import org.phasewright.runtime.integrate.DenseStep;
+import org.phasewright.runtime.integrate.DormandPrince54;
+import org.phasewright.runtime.integrate.IntegrationOutcome;
+import org.phasewright.runtime.integrate.IntegratorSettings;
+import org.phasewright.runtime.integrate.StepObserver;
+import org.phasewright.runtime.symbolic.InitialValues;
+
+/**
+ * Orbit diagram: one integration per parameter value, run in parallel on a pool of its own. A local maximum of
+ * state i is a falling zero of its rate f_i, located on the dense output (so its value is accurate to the
+ * integration tolerance, not to the step). Generated vector fields are stateless and shared by all threads; the
+ * interpreter is not thread-safe, so a model that fell back to it runs on one thread.
+ */
+public final class OrbitDiagram {
+    private OrbitDiagram() {
+    }
+
+    /**
+     * @param settings tolerances, step limit, blow-up bound, deadline and cancellation of every integration
+     * @param progress hears the fraction of parameter values done, on the calling thread; may be null
+     */
+    public static SweepOutcome run(CompiledModel model, ParameterVector parameters, double from, double to,
+            int steps, double endTime, IntegratorSettings settings, BooleanSupplier cancelled,
+            DoubleConsumer progress) {
+        int threads = model.backend() == CompiledModel.Backend.GENERATED_CODE
+                ? Math.max(1, Math.min(steps, Runtime.getRuntime().availableProcessors())) : 1;
+        ForkJoinPool pool = new ForkJoinPool(threads);
+        List<Future<SweepColumn>> futures = new ArrayList<>();
+        try {
+            for (int k = 0; k < steps; k++) {
+                double value = steps == 1 ? from : from + (to - from) * k / (steps - 1);
+                futures.add(pool.submit(() -> column(model, parameters, value, endTime, settings, cancelled)));
+            }
+            List<SweepColumn> columns = new ArrayList<>();
+            boolean failed = false;
+            int done = 0;
+            for (Future<SweepColumn> f : futures) {
+                SweepColumn c = f.get();
+                if (progress != null) {
+                    progress.accept(++done / (double) steps);
+                }
+                if (c != null) {
+                    columns.add(c);
+                    failed |= !c.ending().equals("COMPLETED");
+                }
+            }
+            SweepOutcome.Ending ending = cancelled.getAsBoolean() ? SweepOutcome.Ending.CANCELLED
+                    : columns.size() < steps || expired(settings) ? SweepOutcome.Ending.TIME_LIMIT
+                            : failed ? SweepOutcome.Ending.SOME_FAILED : SweepOutcome.Ending.COMPLETED;
+            return new SweepOutcome(parameters.name(), from, to, endTime, columns, steps, threads, ending);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            return new SweepOutcome(parameters.name(), from, to, endTime, List.of(), steps, threads,
+                    SweepOutcome.Ending.CANCELLED);
+        } catch (ExecutionException e) {
+            throw new IllegalStateException("orbit diagram: " + e.getCause(), e.getCause());
+        } finally {
+            pool.shutdownNow();
+        }
+    }
+
+    private static boolean expired(IntegratorSettings s) {
+        return s.deadlineNanos() != Long.MAX_VALUE && System.nanoTime() - s.deadlineNanos() > 0;
+    }
+
+    /** One parameter value; null when the budget ran out before it started. */
+    private static SweepColumn column(CompiledModel model, ParameterVector parameters, double value, double endTime,
+            IntegratorSettings settings, BooleanSupplier cancelled) {
+        if (cancelled.getAsBoolean() || expired(settings)) {
+            return null;
+        }
+        double[] p = parameters.at(value);
+        double[] u0 = InitialValues.resolve(model.model(), p);
+        VectorField field = model.field();
+        int n = model.dimension();
+        double settle = endTime / 2; // the first half is left to transients
+        List<CrossingLocator> locators = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            final int state = i;
+            double[] rates = new double[n]; // one buffer per locator and thread
+            locators.add(new CrossingLocator((t, u) -> {
+                field.rates(t, u, p, rates);
+                return rates[state];
+            }, CrossingLocator.Direction.FALLING, n, 100_000));
+        }
+        StepObserver afterTransients = new StepObserver() {
+            private boolean started;
+            private final double[] u = new double[n];
+
+            @Override
+            public void step(DenseStep step) {
+                if (step.endTime() <= settle) {
+                    return;
+                }
+                if (!started) { // the locators begin at the first step that reaches past the transients
+                    step.stateAt(step.startTime(), u);
+                    for (CrossingLocator l : locators) {
+                        l.start(step.startTime(), u);
+                    }
+                    started = true;
+                }
+                for (CrossingLocator l : locators) {
+                    l.step(step);
+                }
+            }
+        };
+        IntegrationOutcome outcome = new DormandPrince54(field, p).integrate(0.0, u0, endTime, settings,
+                afterTransients);
+        double[][] maxima = new double[n][];
+        for (int i = 0; i < n; i++) {
+            double[] times = locators.get(i).times();
+            double[][] states = locators.get(i).states();
+            List<Double> kept = new ArrayList<>();
+            for (int k = 0; k < times.length; k++) {
+                if (times[k] >= settle) {
+                    kept.add(states[k][i]);
+                }
+            }
+            maxima[i] = kept.stream().mapToDouble(Double::doubleValue).toArray();
+        }
+        return new SweepColumn(value, maxima, outcome.ending().name());
+    }
+}

@@ -12,6 +12,11 @@ public class PhaseRuntimeModule extends AbstractPhaseRuntimeModule {
         return PhaseLinkingDiagnosticMessageProvider.class;
     }
 
+    /** Expressions have no names; answering so directly keeps indexing linear in deeply nested text. */
+    public Class<? extends org.eclipse.xtext.naming.IQualifiedNameProvider> bindIQualifiedNameProvider() {
+        return org.phasewright.language.naming.PhaseQualifiedNameProvider.class;
+    }
+
     /** The canonical layout of `.phase` files (editors' format command, and any future batch formatting). */
     public Class<? extends IFormatter2> bindIFormatter2() {
         return PhaseFormatter.class;

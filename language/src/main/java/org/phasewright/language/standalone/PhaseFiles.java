@@ -62,7 +62,7 @@ public final class PhaseFiles {
         return check(shown, URI.createFileURI(file.toAbsolutePath().toString()), text);
     }
 
-    /** Stack of the thread that parses and validates: the generated parser recurses several frames per nesting level. */
+    /** Stack of the thread that parses and validates: the parser recurses several frames per nesting level. */
     static final long PARSER_STACK_BYTES = 256L << 20;
 
     /**
@@ -116,7 +116,7 @@ public final class PhaseFiles {
             return new CheckedModel(shown, null,
                     List.of(new Problem(Problem.Severity.ERROR, shown, 1, 1, "File cannot be parsed.", null)));
         } catch (StackOverflowError | org.eclipse.xtext.parser.ParseException e) {
-            if (e instanceof org.eclipse.xtext.parser.ParseException && !(e.getCause() instanceof StackOverflowError)) {
+            if (e instanceof org.eclipse.xtext.parser.ParseException && !causedByStackOverflow(e)) {
                 throw e;
             }
             // Only absurd nesting gets here (thousands of levels): the validator reports depths above
@@ -132,6 +132,15 @@ public final class PhaseFiles {
         }
         problems.sort(Comparator.comparingInt(Problem::line).thenComparingInt(Problem::column));
         return new CheckedModel(shown, rootOf(resource), problems);
+    }
+
+    private static boolean causedByStackOverflow(Throwable e) {
+        for (Throwable c = e; c != null && c.getCause() != c; c = c.getCause()) {
+            if (c instanceof StackOverflowError) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static PhaseModel rootOf(Resource resource) {

@@ -16,8 +16,8 @@ import org.phasewright.language.phase.Expression;
  * generation) against stack overflow: an expression nested deeper than {@link #MAX_DEPTH} levels is an error at its
  * start, and the other checks do not run on such a model. Depth counts every operator, call, negation and
  * parenthesised group between the outermost expression and a leaf, so a sum of 300 terms is 300 levels deep
- * (sums associate to the left). Measured with nothing else on the stack, the deepest walkers overflow a 512 KB
- * thread stack well above this limit.
+ * (sums associate to the left). A model at the limit is checked, compiled and run on an ordinary thread stack in
+ * the tests ({@code CrasherCorpusTest}); see docs/reliability.md.
  */
 public final class ExpressionDepth {
     /** Generous for hand-written and generated models; {@code let} splits a longer sum. */

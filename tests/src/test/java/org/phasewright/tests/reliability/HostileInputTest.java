@@ -91,6 +91,31 @@ class HostileInputTest {
     }
 
     @Test
+    void theHtmlReportShowsHostileTextAsText() throws Exception {
+        Path model = folder.resolve("hostile.phase");
+        Files.writeString(model, HOSTILE, StandardCharsets.UTF_8);
+        Path out = folder.resolve("out");
+        CliRun run = CliRun.of("run", model.toString(), "--quiet", "--out", out.toString());
+        assertEquals(0, run.exitCode(), run.toString());
+        run.assertNoTrace();
+        try (Stream<Path> files = Files.walk(out)) {
+            List<Path> written = files.filter(Files::isRegularFile).toList();
+            assertTrue(written.stream().anyMatch(f -> f.toString().endsWith(".html")), written.toString());
+            for (Path f : written) {
+                if (f.toString().endsWith(".html")) {
+                    String html = Files.readString(f, StandardCharsets.UTF_8);
+                    assertFalse(html.contains("<script>alert(1)"), f + " lets markup from the model through");
+                    assertTrue(html.contains("&lt;script&gt;alert(1)") || !html.contains("alert(1)"),
+                            f + " shows the title unescaped");
+                }
+                if (f.toString().endsWith(".json")) {
+                    JsonParser.parseString(Files.readString(f, StandardCharsets.UTF_8));
+                }
+            }
+        }
+    }
+
+    @Test
     void studyAndModelNamesCannotBePaths() {
         // Study names become folder names; the grammar admits only letters, digits and '_' there.
         for (String name : List.of("../escape", "/tmp/x", "a/b", "..", "a\\\\b", "\"quoted\"", "C:x", "a.b")) {

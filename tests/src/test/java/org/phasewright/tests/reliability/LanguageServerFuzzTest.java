@@ -104,6 +104,7 @@ class LanguageServerFuzzTest extends AbstractLanguageServerTest {
                     skipped++;
                     continue; // deep nesting and lone carriage returns; see the class comment
                 }
+                // A new file per text: reusing one name let diagnostics of an earlier text be read for a later one.
                 String uri = writeFile("f" + i + ".phase", text);
                 open(uri, text);
                 List<Diagnostic> diagnostics = getDiagnostics().getOrDefault(uri, List.of());
@@ -127,7 +128,8 @@ class LanguageServerFuzzTest extends AbstractLanguageServerTest {
         } finally {
             Logger.getRootLogger().removeAppender(listener);
         }
-        System.out.printf("language server fuzz: seed %d, %d texts opened, %d skipped%n", seed, count - skipped, skipped);
+        System.out.printf("language server fuzz: seed %d, %d texts opened, %d skipped%n", seed, count - skipped,
+                skipped);
         assertTrue(findings.isEmpty(), findings.size() + " findings:\n"
                 + String.join("\n", findings.subList(0, Math.min(5, findings.size()))));
     }

@@ -1,5 +1,7 @@
 package org.phasewright.runtime.equilibria;
 
+import org.phasewright.runtime.linalg.DenseLu;
+
 import org.phasewright.runtime.compile.VectorField;
 
 /**

@@ -1,5 +1,7 @@
 package org.phasewright.runtime.integrate;
 
+import org.phasewright.runtime.linalg.Vectors;
+
 import org.phasewright.runtime.compile.VectorField;
 
 /**
@@ -236,18 +238,18 @@ public final class DormandPrince853 implements Integrator {
         Counters c = new Counters();
         System.arraycopy(u0, 0, y, 0, n);
         double t = t0;
-        if (!allFinite(y)) {
+        if (!Vectors.allFinite(y)) {
             return c.outcome(IntegrationOutcome.Ending.NOT_FINITE, t, y, 0, s);
         }
         field.rates(t, y, p, k0);
         c.evaluations++;
-        if (!allFinite(k0)) {
+        if (!Vectors.allFinite(k0)) {
             return c.outcome(IntegrationOutcome.Ending.NOT_FINITE, t, y, 0, s);
         }
         if (observer != null) {
             observer.start(t, y);
         }
-        if (normInf(y) > s.blowUpBound()) {
+        if (Vectors.normInf(y) > s.blowUpBound()) {
             return c.outcome(IntegrationOutcome.Ending.BLEW_UP, t, y, 0, s);
         }
         if (t0 == tEnd || n == 0) {
@@ -303,7 +305,7 @@ public final class DormandPrince853 implements Integrator {
             }
             double deno = err5 + 0.01 * err3;
             double err = Math.abs(h) * err5 * Math.sqrt(1.0 / (n * (deno <= 0 ? 1.0 : deno)));
-            if (!Double.isFinite(err) || !allFinite(yNew)) {
+            if (!Double.isFinite(err) || !Vectors.allFinite(yNew)) {
                 c.rejected++;
                 rejectedLast = true;
                 nonFiniteLast = true;
@@ -353,7 +355,7 @@ public final class DormandPrince853 implements Integrator {
                         return c.outcome(IntegrationOutcome.Ending.STOPPED, t, y, h, s);
                     }
                 }
-                if (normInf(y) > s.blowUpBound()) {
+                if (Vectors.normInf(y) > s.blowUpBound()) {
                     return c.outcome(IntegrationOutcome.Ending.BLEW_UP, t, y, h, s);
                 }
                 if (last) {
@@ -500,23 +502,6 @@ public final class DormandPrince853 implements Integrator {
         double der12 = Math.max(der2, Math.sqrt(dnf));
         double h1 = der12 <= 1e-15 ? Math.max(1e-6, h * 1e-3) : Math.pow(0.01 / der12, 1.0 / 8);
         return Math.min(Math.min(100 * h, h1), hMax);
-    }
-
-    private static boolean allFinite(double[] v) {
-        for (double x : v) {
-            if (!Double.isFinite(x)) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    private static double normInf(double[] v) {
-        double m = 0;
-        for (double x : v) {
-            m = Math.max(m, Math.abs(x));
-        }
-        return m;
     }
 
     /** The last accepted step, seen by observers. */

@@ -1,5 +1,8 @@
 package org.phasewright.runtime.integrate;
 
+import org.phasewright.runtime.linalg.DenseLu;
+import org.phasewright.runtime.linalg.Vectors;
+
 import org.phasewright.runtime.compile.VectorField;
 
 /**
@@ -47,7 +50,7 @@ public final class Rodas4 implements Integrator {
     private final boolean autonomous;
     private double[] y, yNew;
     private final double[] f0, ft, fs, yStage, k1, k2, k3, k4, k5, k6, jac, matrix, q1, q2, yOld;
-    private final Lu lu;
+    private final DenseLu lu;
     private final Dense dense = new Dense();
 
     /** @param autonomous true when the rates do not depend on time (saves the time-derivative evaluation) */
@@ -73,7 +76,7 @@ public final class Rodas4 implements Integrator {
         q2 = new double[n];
         jac = new double[n * n];
         matrix = new double[n * n];
-        lu = new Lu(n);
+        lu = new DenseLu(n);
     }
 
     @Override
@@ -88,13 +91,13 @@ public final class Rodas4 implements Integrator {
         long evaluations = 0, accepted = 0, rejected = 0, jacobians = 0;
         System.arraycopy(u0, 0, y, 0, n);
         double t = t0;
-        if (!allFinite(y)) {
+        if (!Vectors.allFinite(y)) {
             return outcome(IntegrationOutcome.Ending.NOT_FINITE, t, 0, s, evaluations, accepted, rejected);
         }
         if (observer != null) {
             observer.start(t, y);
         }
-        if (normInf(y) > s.blowUpBound()) {
+        if (Vectors.normInf(y) > s.blowUpBound()) {
             return outcome(IntegrationOutcome.Ending.BLEW_UP, t, 0, s, evaluations, accepted, rejected);
         }
         if (t0 == tEnd || n == 0) {
@@ -144,7 +147,7 @@ public final class Rodas4 implements Integrator {
                         ft[i] = (ft[i] - f0[i]) / delta;
                     }
                 }
-                if (!allFinite(f0) || !allFinite(jac)) {
+                if (!Vectors.allFinite(f0) || !Vectors.allFinite(jac)) {
                     return outcome(IntegrationOutcome.Ending.NOT_FINITE, t, h, s, evaluations, accepted, rejected);
                 }
                 needJacobian = false;
@@ -223,7 +226,7 @@ public final class Rodas4 implements Integrator {
                 err += e * e;
             }
             err = Math.sqrt(err / n);
-            if (!Double.isFinite(err) || !allFinite(yNew)) {
+            if (!Double.isFinite(err) || !Vectors.allFinite(yNew)) {
                 rejected++;
                 rejectedLast = true;
                 nonFiniteLast = true;
@@ -263,7 +266,7 @@ public final class Rodas4 implements Integrator {
                         return outcome(IntegrationOutcome.Ending.STOPPED, t, h, s, evaluations, accepted, rejected);
                     }
                 }
-                if (normInf(y) > s.blowUpBound()) {
+                if (Vectors.normInf(y) > s.blowUpBound()) {
                     return outcome(IntegrationOutcome.Ending.BLEW_UP, t, h, s, evaluations, accepted, rejected);
                 }
                 if (last) {
@@ -287,23 +290,6 @@ public final class Rodas4 implements Integrator {
     private IntegrationOutcome outcome(IntegrationOutcome.Ending ending, double t, double h, IntegratorSettings s,
             long evaluations, long accepted, long rejected) {
         return new IntegrationOutcome(ending, t, y, evaluations, accepted, rejected, h, s.blowUpBound());
-    }
-
-    private static boolean allFinite(double[] v) {
-        for (double x : v) {
-            if (!Double.isFinite(x)) {
-                return false;
-            }
-        }
-        return true;
-    }
-
-    private static double normInf(double[] v) {
-        double m = 0;
-        for (double x : v) {
-            m = Math.max(m, Math.abs(x));
-        }
-        return m;
     }
 
     private final class Dense implements DenseStep {
@@ -337,78 +323,6 @@ public final class Rodas4 implements Integrator {
         @Override
         public double[] endState() {
             return y;
-        }
-    }
-
-    /** LU with partial pivoting on preallocated storage (the Newton solver's twin, kept here to stay layered). */
-    private static final class Lu {
-        private final int n;
-        private final double[] a;
-        private final int[] pivot;
-
-        Lu(int n) {
-            this.n = n;
-            this.a = new double[n * n];
-            this.pivot = new int[n];
-        }
-
-        boolean factor(double[] m) {
-            System.arraycopy(m, 0, a, 0, n * n);
-            for (int k = 0; k < n; k++) {
-                int best = k;
-                for (int i = k + 1; i < n; i++) {
-                    if (Math.abs(a[i * n + k]) > Math.abs(a[best * n + k])) {
-                        best = i;
-                    }
-                }
-                pivot[k] = best;
-                if (best != k) {
-                    for (int j = 0; j < n; j++) {
-                        double tmp = a[k * n + j];
-                        a[k * n + j] = a[best * n + j];
-                        a[best * n + j] = tmp;
-                    }
-                }
-                double d = a[k * n + k];
-                if (d == 0 || !Double.isFinite(d)) {
-                    return false;
-                }
-                for (int i = k + 1; i < n; i++) {
-                    double f = a[i * n + k] / d;
-                    a[i * n + k] = f;
-                    if (f != 0) {
-                        for (int j = k + 1; j < n; j++) {
-                            a[i * n + j] -= f * a[k * n + j];
-                        }
-                    }
-                }
-            }
-            return true;
-        }
-
-        void solve(double[] b) {
-            for (int k = 0; k < n; k++) {
-                int pk = pivot[k];
-                if (pk != k) {
-                    double tmp = b[k];
-                    b[k] = b[pk];
-                    b[pk] = tmp;
-                }
-            }
-            for (int i = 1; i < n; i++) {
-                double s = b[i];
-                for (int j = 0; j < i; j++) {
-                    s -= a[i * n + j] * b[j];
-                }
-                b[i] = s;
-            }
-            for (int i = n - 1; i >= 0; i--) {
-                double s = b[i];
-                for (int j = i + 1; j < n; j++) {
-                    s -= a[i * n + j] * b[j];
-                }
-                b[i] = s / a[i * n + i];
-            }
         }
     }
 }

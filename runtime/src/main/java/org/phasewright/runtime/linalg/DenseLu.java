@@ -1,19 +1,22 @@
-package org.phasewright.runtime.equilibria;
+package org.phasewright.runtime.linalg;
 
-/** LU factorisation with partial pivoting on a preallocated row-major matrix, so Newton loops allocate nothing. */
-final class DenseLu {
+/**
+ * LU factorisation with partial pivoting on a preallocated row-major matrix, so Newton loops and implicit integrator
+ * stages allocate nothing.
+ */
+public final class DenseLu {
     private final int n;
     private final double[] lu;
     private final int[] pivot;
 
-    DenseLu(int n) {
+    public DenseLu(int n) {
         this.n = n;
         this.lu = new double[n * n];
         this.pivot = new int[n];
     }
 
     /** Factors a copy of {@code m}; false when a pivot is negligible against the largest entry (singular). */
-    boolean factor(double[] m) {
+    public boolean factor(double[] m) {
         System.arraycopy(m, 0, lu, 0, n * n);
         double scale = 0;
         for (int i = 0; i < n * n; i++) {
@@ -58,7 +61,7 @@ final class DenseLu {
     }
 
     /** Solves A x = b in place (b becomes x). */
-    void solve(double[] b) {
+    public void solve(double[] b) {
         for (int k = 0; k < n; k++) {
             int pk = pivot[k];
             if (pk != k) {

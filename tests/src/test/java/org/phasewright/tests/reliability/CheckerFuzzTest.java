@@ -15,7 +15,7 @@ import org.phasewright.language.standalone.PhaseFiles;
  * without errors through lowering, compilation and a tiny-budget run of every study (common practice: property
  * checks with a seeded generator; the oracle is {@link FuzzOracle}). Sizes come from system properties so CI runs a
  * modest campaign and the {@code fuzz} profile a large one:
- * {@code phasewright.fuzz.texts} (default 12000; 100000 in the profile), {@code phasewright.fuzz.runEvery} (send
+ * {@code phasewright.fuzz.texts} (default 100000, the per-CI-run budget; 400000 in the profile), {@code phasewright.fuzz.runEvery} (send
  * every n-th error-free text down the pipeline, default 6), {@code phasewright.fuzz.seed}. Failing texts are kept in
  * {@code target/fuzz-findings/} to be added to the crasher corpus.
  */
@@ -25,7 +25,7 @@ class CheckerFuzzTest {
 
     @Test
     void everyTextEndsInPositionedProblemsOrANamedOutcome() {
-        int count = Integer.getInteger("phasewright.fuzz.texts", 12_000);
+        int count = Integer.getInteger("phasewright.fuzz.texts", 100_000);
         int runEvery = Integer.getInteger("phasewright.fuzz.runEvery", 6);
         long seed = Long.getLong("phasewright.fuzz.seed", 20261202L);
         PhaseTextFuzzer fuzzer = new PhaseTextFuzzer(seed, PhaseTextFuzzer.exampleTexts());

@@ -9,6 +9,7 @@ public final class IssueCodes {
 
     public static final String DUPLICATE_NAME = PREFIX + "duplicateName";
     public static final String DUPLICATE_TIME = PREFIX + "duplicateTime";
+    public static final String STUDY_NAME_TOO_LONG = PREFIX + "studyNameTooLong";
     public static final String NO_STATES = PREFIX + "noStates";
     public static final String MISSING_RATE = PREFIX + "missingRate";
     public static final String DUPLICATE_RATE = PREFIX + "duplicateRate";

@@ -26,6 +26,18 @@ public class NameChecks extends PhaseCheckBase {
         reportDuplicates(PhaseModels.membersOf(model, StudyDecl.class));
     }
 
+    /** Study results go to a folder named after the study; file systems allow 255 bytes per name, we keep a margin. */
+    static final int MAX_STUDY_NAME_LENGTH = 100;
+
+    @Check
+    public void studyNameFitsAFolderName(StudyDecl study) {
+        if (study.getName() != null && study.getName().length() > MAX_STUDY_NAME_LENGTH) {
+            error("Study name is " + study.getName().length() + " characters long; its results folder is named after it,"
+                    + " so keep it to at most " + MAX_STUDY_NAME_LENGTH + ".", study, PHASE.getStudyDecl_Name(),
+                    IssueCodes.STUDY_NAME_TOO_LONG);
+        }
+    }
+
     @Check
     public void singleTimeVariable(PhaseModel model) {
         List<TimeDecl> times = PhaseModels.timeDecls(model);

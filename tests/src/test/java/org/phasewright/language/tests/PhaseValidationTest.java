@@ -226,4 +226,15 @@ class PhaseValidationTest {
         assertTrue(issues("model m\nstate x = 1\nrate x = -x\nstudy s { simulate to t = 1 tolerance 1e-6 }\n")
                 .isEmpty());
     }
+
+    @Test
+    void studyNameMustFitAFolderName() throws Exception {
+        // Found by the checker fuzz: a 250-character study name made writing its results folder fail
+        // (file systems allow 255 bytes per name; common practice, no published source).
+        String model = "model m\nstate x = 1\nrate x = -x\nstudy %s { equilibria }\n";
+        String message = single(String.format(model, "s".repeat(101)), IssueCodes.STUDY_NAME_TOO_LONG, Severity.ERROR,
+                4, 7);
+        assertTrue(message.contains("101 characters"), message);
+        assertTrue(withCode(String.format(model, "s".repeat(100)), IssueCodes.STUDY_NAME_TOO_LONG).isEmpty());
+    }
 }

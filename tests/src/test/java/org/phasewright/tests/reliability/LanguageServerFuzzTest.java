@@ -12,21 +12,8 @@ import org.apache.log4j.Logger;
 import org.apache.log4j.spi.LoggingEvent;
 import org.eclipse.lsp4j.Diagnostic;
 import org.eclipse.lsp4j.Position;
-import org.eclipse.lsp4j.jsonrpc.services.ServiceEndpoints;
-import org.eclipse.xtext.LanguageInfo;
-import org.eclipse.xtext.resource.IResourceServiceProvider;
-import org.eclipse.xtext.testing.AbstractLanguageServerTest;
-import org.eclipse.xtext.util.Modules2;
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
-import org.phasewright.language.ide.PhaseIdeSetup;
-import org.phasewright.language.ide.server.PhaseServerModule;
-
-import com.google.inject.Guice;
-import com.google.inject.Injector;
-import com.google.inject.Module;
+import org.phasewright.language.ide.tests.LanguageServerTestBase;
 
 /**
  * A share of the fuzz campaign through an in-process language server: each text is opened as a document; its
@@ -35,38 +22,7 @@ import com.google.inject.Module;
  * (deep nesting, covered by {@link CrasherCorpusTest} and the command line, which parses on a large stack) and texts
  * with a lone carriage return, where the server's positions count only line feeds as line breaks.
  */
-class LanguageServerFuzzTest extends AbstractLanguageServerTest {
-    @TempDir
-    Path workspace;
-
-    LanguageServerFuzzTest() {
-        super("phase");
-    }
-
-    @Override
-    protected Module getServerModule() {
-        return Modules2.mixin(super.getServerModule(), new PhaseServerModule());
-    }
-
-    /** As the project's other server tests: a temporary workspace and the injector the server serves from. */
-    @Override
-    @BeforeEach
-    public void setup() {
-        Guice.createInjector(getServerModule()).injectMembers(this);
-        Object language = resourceServerProviderRegistry.getExtensionToFactoryMap().get(fileExtension);
-        if (language instanceof IResourceServiceProvider provider) {
-            languageInfo = provider.get(LanguageInfo.class);
-            new PhaseIdeSetup().register(provider.get(Injector.class));
-        }
-        languageServer.connect(ServiceEndpoints.toServiceObject(this, getLanguageClientClass()));
-        languageServer.supportedMethods();
-        root = workspace.toFile();
-    }
-
-    @Override
-    @AfterEach
-    public void cleanup() {
-    }
+class LanguageServerFuzzTest extends LanguageServerTestBase {
 
     @Test
     void diagnosticsOfEveryTextLieInsideIt() {

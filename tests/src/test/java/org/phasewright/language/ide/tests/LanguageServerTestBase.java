@@ -34,12 +34,12 @@ import com.google.inject.Module;
  * In-process language-server tests: Xtext's test harness (JUnit 4 style, driven from JUnit 5 here) with our server
  * module, a workspace in a temporary folder, and helpers to turn positions into offsets and apply edits.
  */
-abstract class LanguageServerTestBase extends AbstractLanguageServerTest {
+public abstract class LanguageServerTestBase extends AbstractLanguageServerTest {
 
     @TempDir
-    Path workspace;
+    protected Path workspace;
 
-    LanguageServerTestBase() {
+    protected LanguageServerTestBase() {
         super("phase");
     }
 

@@ -220,24 +220,19 @@ public final class BranchFollower {
      */
     private void locate(SpecialPoint.Kind kind, double[] x, double[] t, double h, Tests at0, Tests atH, int branch,
             List<ContinuationPoint> points) {
-        double a = 0, b = h;
-        double fa = value(kind, at0), fb = value(kind, atH);
+        RegulaFalsiBracket bracket = new RegulaFalsiBracket(0, value(kind, at0), h, value(kind, atH));
         double[] predicted = new double[n + 1];
         double[] best = null;
         double[] bestTangent = null;
         Tests bestTests = null;
-        int side = 0;
         for (int k = 0; k < LOCATE_ITERATIONS; k++) {
-            double s = b - fb * (b - a) / (fb - fa);
-            if (!(s > Math.min(a, b) && s < Math.max(a, b))) {
-                s = (a + b) / 2;
-            }
+            double s = bracket.trial();
             double[] y = new double[n + 1];
             boolean corrected = false;
             // exactly at a branch point the bordered matrix is singular (regula falsi hits it at once when the test
             // function is linear), so a failed correction is retried a hair to one side
             for (int attempt = 0; attempt < 3 && !corrected; attempt++) {
-                double trial = s + attempt * 1e-9 * (b - a);
+                double trial = s + attempt * 1e-9 * bracket.signedWidth();
                 for (int i = 0; i <= n; i++) {
                     predicted[i] = x[i] + trial * t[i];
                 }
@@ -259,24 +254,11 @@ public final class BranchFollower {
             best = y;
             bestTangent = ty;
             bestTests = ts;
-            if (fs == 0 || Math.abs(b - a) <= 1e-13 * (1 + maxAbs(y, n + 1))) {
+            if (fs == 0 || bracket.width() <= 1e-13 * (1 + maxAbs(y, n + 1))) {
                 break;
             }
-            if (Math.signum(fs) == Math.signum(fb)) {
-                b = s;
-                fb = fs;
-                if (side == -1) {
-                    fa /= 2;
-                }
-                side = -1;
-            } else {
-                a = b;
-                fa = fb;
-                b = s;
-                fb = fs;
-                side = 1;
-            }
-            if (Math.abs(b - a) <= 1e-13 * (1 + maxAbs(y, n + 1))) {
+            bracket.update(s, fs);
+            if (bracket.width() <= 1e-13 * (1 + maxAbs(y, n + 1))) {
                 break;
             }
         }

@@ -10,6 +10,7 @@ import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.EigenDecomposition;
 import org.phasewright.runtime.compile.VectorField;
 import org.phasewright.runtime.continuation.ParameterVector;
+import org.phasewright.runtime.continuation.RegulaFalsiBracket;
 import org.phasewright.runtime.continuation.SquareSolve;
 import org.phasewright.runtime.integrate.IntegratorSettings;
 
@@ -170,15 +171,11 @@ public final class CycleFollower {
     /** Regula falsi (Illinois) on det(M + I) along the step, correcting onto the family at every trial. */
     private void locate(List<CyclePoint> points, double[] x, double[] t, double h, double f0, double f1,
             CycleBranch.Special kind) {
-        double a = 0, b = h, fa = f0, fb = f1;
+        RegulaFalsiBracket bracket = new RegulaFalsiBracket(0, f0, h, f1);
         double[] best = null;
         PeriodMap.Shot bestShot = null;
-        int side = 0;
-        for (int k = 0; k < 40 && Math.abs(b - a) > 1e-12 * (1 + h); k++) {
-            double s = b - fb * (b - a) / (fb - fa);
-            if (!(s > Math.min(a, b) && s < Math.max(a, b))) {
-                s = (a + b) / 2;
-            }
+        for (int k = 0; k < 40 && bracket.width() > 1e-12 * (1 + h); k++) {
+            double s = bracket.trial();
             double[] y = correct(add(x, s, t), t, Arrays.copyOf(x, n), x[n + 1]);
             if (y == null) {
                 break;
@@ -189,20 +186,7 @@ public final class CycleFollower {
             if (fs == 0) {
                 break;
             }
-            if (Math.signum(fs) == Math.signum(fb)) {
-                b = s;
-                fb = fs;
-                if (side == -1) {
-                    fa /= 2;
-                }
-                side = -1;
-            } else {
-                a = b;
-                fa = fb;
-                b = s;
-                fb = fs;
-                side = 1;
-            }
+            bracket.update(s, fs);
         }
         if (best != null && best[n + 1] >= lo && best[n + 1] <= hi) {
             points.add(point(best, bestShot, kind));

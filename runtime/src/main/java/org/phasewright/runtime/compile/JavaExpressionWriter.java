@@ -6,7 +6,10 @@ import org.phasewright.runtime.model.Binary;
 import org.phasewright.runtime.model.BinaryOperator;
 import org.phasewright.runtime.model.Call;
 import org.phasewright.runtime.model.Constant;
+import org.phasewright.runtime.model.Element;
 import org.phasewright.runtime.model.Expr;
+import org.phasewright.runtime.model.IndexValue;
+import org.phasewright.runtime.model.Sum;
 import org.phasewright.runtime.model.Negation;
 import org.phasewright.runtime.model.Variable;
 import org.phasewright.runtime.symbolic.Arithmetic;
@@ -63,7 +66,14 @@ final class JavaExpressionWriter {
                 }
                 out.append(')');
             }
+            case IndexValue i -> throw unexpanded(i);
+            case Element el -> throw unexpanded(el);
+            case Sum sum -> throw unexpanded(sum);
         }
+    }
+
+    private static IllegalArgumentException unexpanded(Expr e) {
+        return new IllegalArgumentException("indexed form reaches the scalar code writer: " + e);
     }
 
     /** Mirrors {@link Arithmetic#power}: small integer exponents multiply out, others call Math.pow. */

@@ -9,7 +9,10 @@ import org.phasewright.runtime.model.Binary;
 import org.phasewright.runtime.model.Call;
 import org.phasewright.runtime.model.Constant;
 import org.phasewright.runtime.model.DynamicalModel;
+import org.phasewright.runtime.model.Element;
 import org.phasewright.runtime.model.Expr;
+import org.phasewright.runtime.model.IndexValue;
+import org.phasewright.runtime.model.Sum;
 import org.phasewright.runtime.model.Negation;
 import org.phasewright.runtime.model.Variable;
 import org.phasewright.runtime.symbolic.Arithmetic;
@@ -126,6 +129,15 @@ final class Polynomial {
                     return null;
                 }
                 return constant(n, Arithmetic.apply(call.function(), a.constantValue(), b.constantValue()));
+            }
+            case IndexValue i -> {
+                return null; // flat rates are expanded (IndexExpansion); an indexed form is not a polynomial here
+            }
+            case Element el -> {
+                return null;
+            }
+            case Sum sum -> {
+                return null;
             }
         }
     }

@@ -2,5 +2,5 @@ package org.phasewright.runtime.model;
 
 /** One request inside a study. */
 public sealed interface Analysis permits Simulation, EquilibriumSearch, Section, LyapunovExponents,
-        EquilibriumContinuation, ParameterSweep {
+        EquilibriumContinuation, ParameterSweep, LyapunovMap, Basins {
 }

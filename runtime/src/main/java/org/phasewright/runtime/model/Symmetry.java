@@ -8,6 +8,6 @@ import java.util.List;
  */
 public record Symmetry(String name, List<Expr> images, boolean reversesTime) {
     public Symmetry {
-        images = List.copyOf(images);
+        images = ExpandedList.immutable(images);
     }
 }

@@ -5,6 +5,8 @@ import java.util.List;
 
 import org.phasewright.runtime.compile.CompiledModel;
 import org.phasewright.runtime.model.Analysis;
+import org.phasewright.runtime.model.Basins;
+import org.phasewright.runtime.model.LyapunovMap;
 import org.phasewright.runtime.model.EquilibriumContinuation;
 import org.phasewright.runtime.model.ParameterSweep;
 import org.phasewright.runtime.model.EquilibriumSearch;
@@ -38,6 +40,9 @@ public final class StudyRunner {
                         case LyapunovExponents l -> LyapunovRunner.run(model, l, settings, budget);
                         case EquilibriumContinuation c -> ContinuationRunner.run(model, c, settings, budget);
                         case ParameterSweep w -> SweepRunner.run(model, w, settings, budget);
+                        // TRANSITIONAL (ensemble work in progress): replaced by the ensemble runners
+                        case LyapunovMap m -> failed(analysis, "Lyapunov maps are not available yet");
+                        case Basins b -> failed(analysis, "basins are not available yet");
                     };
                 } catch (RuntimeException e) { // a bug must not surface as a stack trace in a user's terminal
                     result = failed(analysis, "internal error: " + e);
@@ -68,6 +73,8 @@ public final class StudyRunner {
             case LyapunovExponents l -> new LyapunovResult(null, Double.NaN, Status.INCOMPLETE, why, message);
             case EquilibriumContinuation c -> new ContinuationResult(null, Status.INCOMPLETE, why, message);
             case ParameterSweep w -> new SweepResult(null, Status.INCOMPLETE, why, message);
+            case LyapunovMap m -> new SweepResult(null, Status.INCOMPLETE, why, message); // TRANSITIONAL
+            case Basins b -> new SweepResult(null, Status.INCOMPLETE, why, message); // TRANSITIONAL
         };
     }
 
@@ -82,6 +89,8 @@ public final class StudyRunner {
                     message);
             case EquilibriumContinuation c -> new ContinuationResult(null, Status.FAILED, "INTERNAL_ERROR", message);
             case ParameterSweep w -> new SweepResult(null, Status.FAILED, "INTERNAL_ERROR", message);
+            case LyapunovMap m -> new SweepResult(null, Status.FAILED, "INTERNAL_ERROR", message); // TRANSITIONAL
+            case Basins b -> new SweepResult(null, Status.FAILED, "INTERNAL_ERROR", message); // TRANSITIONAL
         };
     }
 }

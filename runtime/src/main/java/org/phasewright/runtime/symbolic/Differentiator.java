@@ -13,7 +13,10 @@ import static org.phasewright.runtime.symbolic.Simplifier.subtract;
 import org.phasewright.runtime.model.Binary;
 import org.phasewright.runtime.model.Call;
 import org.phasewright.runtime.model.Constant;
+import org.phasewright.runtime.model.Element;
 import org.phasewright.runtime.model.Expr;
+import org.phasewright.runtime.model.IndexValue;
+import org.phasewright.runtime.model.Sum;
 import org.phasewright.runtime.model.MathFunction;
 import org.phasewright.runtime.model.Negation;
 import org.phasewright.runtime.model.Variable;
@@ -47,6 +50,9 @@ public final class Differentiator {
             case Negation n -> negate(partial(n.operand(), j));
             case Binary b -> ofBinary(b, j);
             case Call c -> ofCall(c, j);
+            case IndexValue i -> Constant.ZERO;
+            case Element el -> throw IndexedForms.unexpanded("differentiation", el);
+            case Sum s -> throw IndexedForms.unexpanded("differentiation", s);
         };
     }
 

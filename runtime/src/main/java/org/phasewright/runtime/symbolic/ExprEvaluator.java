@@ -3,7 +3,10 @@ package org.phasewright.runtime.symbolic;
 import org.phasewright.runtime.model.Binary;
 import org.phasewright.runtime.model.Call;
 import org.phasewright.runtime.model.Constant;
+import org.phasewright.runtime.model.Element;
 import org.phasewright.runtime.model.Expr;
+import org.phasewright.runtime.model.IndexValue;
+import org.phasewright.runtime.model.Sum;
 import org.phasewright.runtime.model.Negation;
 import org.phasewright.runtime.model.Variable;
 import org.phasewright.runtime.model.VariableKind;
@@ -44,6 +47,9 @@ public final class ExprEvaluator {
                         ? evaluate(c.arguments().get(1), t, states, parameters, derived) : 0.0;
                 yield Arithmetic.apply(c.function(), a, b);
             }
+            case IndexValue i -> throw IndexedForms.unexpanded("evaluation", i);
+            case Element el -> throw IndexedForms.unexpanded("evaluation", el);
+            case Sum s -> throw IndexedForms.unexpanded("evaluation", s);
         };
     }
 

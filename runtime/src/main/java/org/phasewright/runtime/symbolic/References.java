@@ -7,7 +7,10 @@ import java.util.function.Consumer;
 import org.phasewright.runtime.model.Binary;
 import org.phasewright.runtime.model.Call;
 import org.phasewright.runtime.model.Constant;
+import org.phasewright.runtime.model.Element;
 import org.phasewright.runtime.model.Expr;
+import org.phasewright.runtime.model.IndexValue;
+import org.phasewright.runtime.model.Sum;
 import org.phasewright.runtime.model.Negation;
 import org.phasewright.runtime.model.Variable;
 import org.phasewright.runtime.model.VariableKind;
@@ -27,6 +30,9 @@ public final class References {
                 forEach(b.right(), action);
             }
             case Call c -> c.arguments().forEach(a -> forEach(a, action));
+            case IndexValue i -> { }
+            case Element el -> throw IndexedForms.unexpanded("reference lookup", el);
+            case Sum s -> throw IndexedForms.unexpanded("reference lookup", s);
         }
     }
 

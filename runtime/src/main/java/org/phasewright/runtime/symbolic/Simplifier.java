@@ -7,6 +7,9 @@ import org.phasewright.runtime.model.Binary;
 import org.phasewright.runtime.model.BinaryOperator;
 import org.phasewright.runtime.model.Call;
 import org.phasewright.runtime.model.Constant;
+import org.phasewright.runtime.model.Sum;
+import org.phasewright.runtime.model.Element;
+import org.phasewright.runtime.model.IndexValue;
 import org.phasewright.runtime.model.Expr;
 import org.phasewright.runtime.model.MathFunction;
 import org.phasewright.runtime.model.Negation;
@@ -34,6 +37,9 @@ public final class Simplifier {
                 c.arguments().forEach(a -> args.add(simplify(a)));
                 yield call(c.function(), args);
             }
+            case IndexValue i -> i;
+            case Element el -> new Element(el.kind(), el.family(), el.range(), el.offset(), simplify(el.index()));
+            case Sum s -> new Sum(s.range(), simplify(s.body()));
         };
     }
 

@@ -5,6 +5,9 @@ import java.util.List;
 import org.phasewright.runtime.model.Binary;
 import org.phasewright.runtime.model.Call;
 import org.phasewright.runtime.model.Constant;
+import org.phasewright.runtime.model.Sum;
+import org.phasewright.runtime.model.Element;
+import org.phasewright.runtime.model.IndexValue;
 import org.phasewright.runtime.model.DerivedQuantity;
 import org.phasewright.runtime.model.Expr;
 import org.phasewright.runtime.model.Negation;
@@ -35,6 +38,9 @@ public final class Substitution {
             case Negation n -> new Negation(map(n.operand(), f));
             case Binary b -> new Binary(b.operator(), map(b.left(), f), map(b.right(), f));
             case Call c -> new Call(c.function(), c.arguments().stream().map(a -> map(a, f)).toList());
+            case IndexValue i -> i;
+            case Element el -> el; // families are substituted element by element after IndexExpansion
+            case Sum s -> new Sum(s.range(), map(s.body(), f));
         };
     }
 }

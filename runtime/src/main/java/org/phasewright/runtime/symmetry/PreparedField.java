@@ -9,7 +9,11 @@ import org.phasewright.runtime.model.BinaryOperator;
 import org.phasewright.runtime.model.Call;
 import org.phasewright.runtime.model.Constant;
 import org.phasewright.runtime.model.DynamicalModel;
+import org.phasewright.runtime.model.Element;
 import org.phasewright.runtime.model.Expr;
+import org.phasewright.runtime.model.IndexValue;
+import org.phasewright.runtime.model.Sum;
+import org.phasewright.runtime.symbolic.IndexedForms;
 import org.phasewright.runtime.model.Negation;
 import org.phasewright.runtime.model.Variable;
 import org.phasewright.runtime.model.VariableKind;
@@ -109,6 +113,9 @@ public final class PreparedField {
                     substituteStates(b.right(), images));
             case Call c -> new Call(c.function(),
                     c.arguments().stream().map(a -> substituteStates(a, images)).toList());
+            case IndexValue i -> throw IndexedForms.unexpanded("symmetry substitution", i);
+            case Element el -> throw IndexedForms.unexpanded("symmetry substitution", el);
+            case Sum s -> throw IndexedForms.unexpanded("symmetry substitution", s);
         };
     }
 

@@ -6,7 +6,10 @@ import java.util.Optional;
 import org.phasewright.runtime.model.Binary;
 import org.phasewright.runtime.model.Call;
 import org.phasewright.runtime.model.Constant;
+import org.phasewright.runtime.model.Element;
 import org.phasewright.runtime.model.Expr;
+import org.phasewright.runtime.model.IndexValue;
+import org.phasewright.runtime.model.Sum;
 import org.phasewright.runtime.model.Negation;
 import org.phasewright.runtime.model.Variable;
 
@@ -43,6 +46,9 @@ record RationalForm(Polynomial numerator, Polynomial denominator) {
             }
             case Binary b -> binary(b, variables, timeIndex);
             case Call c -> null;
+            case IndexValue i -> null; // indexed forms are not rational forms until expanded
+            case Element el -> null;
+            case Sum s -> null;
         };
     }
 

@@ -5,6 +5,7 @@ package org.phasewright.language.ide;
 
 import org.eclipse.xtext.generator.GeneratorDelegate;
 import org.eclipse.xtext.generator.IShouldGenerate;
+import org.eclipse.xtext.ide.ExecutorServiceProvider;
 import org.eclipse.xtext.ide.editor.contentassist.IdeContentProposalProvider;
 import org.eclipse.xtext.ide.editor.contentassist.IdeCrossrefProposalProvider;
 import org.eclipse.xtext.ide.editor.syntaxcoloring.ISemanticHighlightingCalculator;
@@ -12,6 +13,7 @@ import org.eclipse.xtext.ide.server.codeActions.ICodeActionService2;
 import org.eclipse.xtext.ide.server.hover.IHoverService;
 import org.eclipse.xtext.ide.server.rename.IRenameService2;
 import org.eclipse.xtext.ide.server.symbol.HierarchicalDocumentSymbolService;
+import org.eclipse.xtext.resource.XtextResource;
 import org.phasewright.language.ide.contentassist.PhaseContentProposalProvider;
 import org.phasewright.language.ide.contentassist.PhaseCrossrefProposalProvider;
 import org.phasewright.language.ide.highlighting.PhaseHighlightingCalculator;
@@ -19,6 +21,8 @@ import org.phasewright.language.ide.hover.PhaseHoverService;
 import org.phasewright.language.ide.outline.PhaseDocumentSymbolService;
 import org.phasewright.language.ide.quickfix.PhaseCodeActionService;
 import org.phasewright.language.ide.rename.PhaseRenameService;
+import org.phasewright.language.ide.server.LargeStackExecutorServiceProvider;
+import org.phasewright.language.ide.server.LineBreakResource;
 import org.phasewright.language.ide.server.StudyOnSave;
 import org.phasewright.language.ide.server.StudyRunningGenerator;
 
@@ -66,5 +70,15 @@ public class PhaseIdeModule extends AbstractPhaseIdeModule {
 
     public Class<? extends GeneratorDelegate> bindGeneratorDelegate() {
         return StudyRunningGenerator.class;
+    }
+
+    /** A lone CR is a line break, as for {@code phasewright check}. */
+    public Class<? extends XtextResource> bindXtextResource() {
+        return LineBreakResource.class;
+    }
+
+    /** Content assist parses on these executors: large stacks, as the server's requests. */
+    public Class<? extends ExecutorServiceProvider> bindExecutorServiceProvider() {
+        return LargeStackExecutorServiceProvider.class;
     }
 }

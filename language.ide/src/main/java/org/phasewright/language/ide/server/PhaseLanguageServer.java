@@ -63,7 +63,7 @@ public class PhaseLanguageServer extends LanguageServerImpl {
             String text = getWorkspaceManager().doRead(uri, (document, resource) -> {
                 // Ask the injector that built this resource: it is the one whose builder will consult the request.
                 studies.set(resource.getResourceServiceProvider().get(StudyOnSave.class));
-                return params.getText() != null ? params.getText() : document.getContents();
+                return params.getText() != null ? LineBreaks.loneCrAsLf(params.getText()) : document.getContents();
             });
             studies.get().requestRun(uri, text);
             return getWorkspaceManager().didChangeFiles(List.of(uri), List.of());

@@ -15,11 +15,14 @@ public final class Main {
 
             Commands:
               check FILE...                      parse and validate; print file:line:column: problems
-              run FILE [--study NAME] [--out DIR] [--axes A,B] [--quiet]
+              run FILE [--study NAME] [--out DIR] [--axes A,B] [--quiet] [--master URL | --no-spark]
                                                  run the studies of a model and write their results
                                                  (default DIR: FILE's folder/<model file name>.results)
                                                  and an HTML report per study in DIR/<study>/report/;
                                                  --axes names the states of the phase plots ("x,z;y,z")
+                                                 orbit diagrams, Lyapunov maps and basins run through
+                                                 Spark: embedded (local[*]) unless --master URL names a
+                                                 cluster (spark://host:7077); --no-spark: local threads
               lsp                                serve editors: language server on stdin/stdout (JSON-RPC)
               help                               show this text
               version                            show the version

@@ -43,6 +43,11 @@ final class ReportStep {
         this.axes = axes;
     }
 
+    /** The model text as read for the report (null if it could not be read). */
+    String text() {
+        return text;
+    }
+
     /** @param axesOption "a,b" or several pairs "a,b;c,d" of state names, or null for the default projections */
     static ReportStep prepare(Path file, PhaseModel ast, String axesOption) throws UsageException {
         String text;

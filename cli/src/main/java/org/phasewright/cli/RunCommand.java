@@ -15,7 +15,10 @@ import org.phasewright.runtime.study.ProgressListener;
 import org.phasewright.runtime.study.RunSettings;
 import org.phasewright.runtime.study.Status;
 
-/** `phasewright run FILE [--study NAME] [--out DIR] [--quiet]`: check, run the studies, write results. */
+/**
+ * `phasewright run FILE [--study NAME] [--out DIR] [--quiet] [--master URL | --no-spark]`: check, run the studies
+ * (ensembles through Spark unless --no-spark), write results.
+ */
 final class RunCommand {
     private final PrintStream out;
     private final PrintStream err;
@@ -26,7 +29,8 @@ final class RunCommand {
     }
 
     int execute(List<String> args) throws UsageException {
-        Arguments parsed = Arguments.parse(args, Set.of("study", "out", "axes"), Set.of("quiet"));
+        Arguments parsed = Arguments.parse(args, Set.of("study", "out", "axes", "master"), Set.of("quiet",
+                "no-spark"));
         if (parsed.operands().size() != 1) {
             throw new UsageException("run needs exactly one .phase file, got " + parsed.operands().size());
         }
@@ -42,9 +46,10 @@ final class RunCommand {
         ReportStep reports = ReportStep.prepare(file, checked.ast(), parsed.option("axes"));
         ProgressListener progress = TerminalProgress.forTerminal(err, parsed.flag("quiet"));
         List<StudyRun> runs;
-        try {
+        try (EnsembleChoice ensembles = EnsembleChoice.of(parsed.option("master"), parsed.flag("no-spark"),
+                new PhaseSourceRecipe(file.getFileName().toString(), reports.text()), err)) {
             runs = reports.run(checked.ast(), resultsRoot, parsed.option("study"), RunSettings.DEFAULT.withProgress(
-                    progress));
+                    progress).withEnsembles(ensembles.executor()));
         } catch (StudyPipelineException e) {
             TerminalProgress.clear(progress);
             err.println(file + ": error: " + e.getMessage());

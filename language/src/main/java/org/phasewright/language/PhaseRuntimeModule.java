@@ -17,6 +17,12 @@ public class PhaseRuntimeModule extends AbstractPhaseRuntimeModule {
         return org.phasewright.language.naming.PhaseQualifiedNameProvider.class;
     }
 
+    /** Names resolve within their own file only; see {@link OwnFileGlobalScopeProvider}. */
+    @Override
+    public Class<? extends org.eclipse.xtext.scoping.IGlobalScopeProvider> bindIGlobalScopeProvider() {
+        return org.phasewright.language.scoping.OwnFileGlobalScopeProvider.class;
+    }
+
     /** The canonical layout of `.phase` files (editors' format command, and any future batch formatting). */
     public Class<? extends IFormatter2> bindIFormatter2() {
         return PhaseFormatter.class;

@@ -155,9 +155,15 @@ final class HtmlReport {
             return;
         }
         h.append("<h2>States</h2>\n<table>\n<tr><th>name</th><th>unit</th><th>description</th></tr>\n");
-        for (StateVariable v : model.states()) {
+        int n = model.states().size();
+        int listed = n > ResultsJson.LISTED_STATES_LIMIT ? ResultsJson.LISTED_STATES : n; // large models: a few rows
+        for (StateVariable v : model.states().subList(0, listed)) {
             h.append("<tr><td>").append(e(v.name())).append("</td><td>").append(e(v.unit())).append("</td><td>")
                     .append(e(v.description())).append("</td></tr>\n");
+        }
+        if (listed < n) {
+            h.append("<tr><td colspan=\"3\">... and ").append(n - listed).append(" more, up to ")
+                    .append(e(model.states().get(n - 1).name())).append("</td></tr>\n");
         }
         h.append("</table>\n");
         h.append("<p class=\"lede\">Time is <b>").append(e(StudyPlots.timeLabel(study, model)))
@@ -186,6 +192,9 @@ final class HtmlReport {
                 case SimulationResult s when s.trajectory() != null && s.trajectory().size() > 0 -> {
                     Trajectory t = s.trajectory();
                     h.append("<dt>samples</dt><dd>").append(t.size()).append("</dd>");
+                    if (t.kept() != null) {
+                        h.append("<dt>kept</dt><dd>").append(e(t.kept())).append("</dd>");
+                    }
                     h.append("<dt>final state</dt><dd>").append(e(state(study.stateNames(),
                             t.stateRow(t.size() - 1)))).append(" at ").append(e(study.timeName())).append(" = ")
                             .append(e(Formats.plain(t.time(t.size() - 1)))).append("</dd>");

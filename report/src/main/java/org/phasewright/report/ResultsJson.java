@@ -16,6 +16,8 @@ import org.phasewright.runtime.study.LyapunovResult;
 import org.phasewright.runtime.study.SectionResult;
 import org.phasewright.runtime.study.SimulationResult;
 import org.phasewright.runtime.study.SweepResult;
+import org.phasewright.runtime.study.LyapunovMapResult;
+import org.phasewright.runtime.study.BasinsResult;
 import org.phasewright.runtime.study.StudyResult;
 import org.phasewright.runtime.study.Trajectory;
 
@@ -29,6 +31,8 @@ import org.phasewright.runtime.study.Trajectory;
 final class ResultsJson {
     static final String FORMAT = "phasewright-results";
     static final int FORMAT_VERSION = 1;
+    /** Above this many states only the first {@link #LISTED_STATES} are listed, as in reduced trajectories. */
+    static final int LISTED_STATES_LIMIT = 1000, LISTED_STATES = 16;
 
     private ResultsJson() {
     }
@@ -47,10 +51,16 @@ final class ResultsJson {
                 .field("seconds", context.runTime().toNanos() / 1e9).endObject();
         j.name("time").beginObject().field("name", study.timeName())
                 .field("unit", model == null ? null : model.time().unit()).endObject();
+        // models with many states list the first few (the trajectory keeps the same ones) and give the count
+        int listed = study.stateNames().size() > LISTED_STATES_LIMIT ? LISTED_STATES : study.stateNames().size();
+        if (listed < study.stateNames().size()) {
+            j.field("stateCount", study.stateNames().size());
+        }
         j.name("states").beginArray();
-        for (String name : study.stateNames()) {
-            StateVariable v = model == null ? null
-                    : model.states().stream().filter(s -> s.name().equals(name)).findFirst().orElse(null);
+        for (int i = 0; i < listed; i++) {
+            String name = study.stateNames().get(i);
+            StateVariable v = model == null || i >= model.states().size() || !model.states().get(i).name()
+                    .equals(name) ? null : model.states().get(i);
             j.beginObject().field("name", name).field("unit", v == null ? null : v.unit())
                     .field("description", v == null ? null : v.description()).endObject();
         }
@@ -107,6 +117,9 @@ final class ResultsJson {
                 Trajectory t = s.trajectory();
                 if (t != null) {
                     j.name("trajectory").beginObject().field("samples", t.size());
+                    if (t.kept() != null) {
+                        j.field("kept", t.kept());
+                    }
                     if (t.size() > 0) {
                         j.field("firstTime", t.time(0)).field("finalTime", t.time(t.size() - 1))
                                 .numbers("finalState", t.stateRow(t.size() - 1));
@@ -164,6 +177,42 @@ final class ResultsJson {
                     j.field("parameterValues", w.sweep().columns().size()).field("threads", w.sweep().threads());
                 }
             }
+            case LyapunovMapResult m -> {
+                if (m.first() != null) {
+                    axes(j, m.first(), m.second());
+                    j.field("executor", m.executor());
+                    j.name("largestExponent").beginArray(); // row i (first axis), column j (second axis)
+                    for (int i = 0; i < m.first().steps(); i++) {
+                        j.beginArray();
+                        for (int k = 0; k < m.second().steps(); k++) {
+                            j.value(m.exponent(i, k)); // NaN (not run) is written as null
+                        }
+                        j.endArray();
+                    }
+                    j.endArray();
+                }
+            }
+            case BasinsResult b -> {
+                if (b.first() != null) {
+                    axes(j, b.first(), b.second());
+                    j.field("executor", b.executor());
+                    j.name("equilibria").beginArray();
+                    for (Equilibrium q : b.equilibria()) {
+                        j.beginObject().field("name", q.name()).numbers("coordinates", q.coordinates()).endObject();
+                    }
+                    j.endArray();
+                    // row i (first axis), column j (second axis): index into equilibria, -1 none, -2 not run
+                    j.name("labels").beginArray();
+                    for (int i = 0; i < b.first().steps(); i++) {
+                        j.beginArray();
+                        for (int k = 0; k < b.second().steps(); k++) {
+                            j.value(b.label(i, k));
+                        }
+                        j.endArray();
+                    }
+                    j.endArray();
+                }
+            }
         }
         j.name("plots").beginArray();
         for (Plot p : plots) {
@@ -173,6 +222,14 @@ final class ResultsJson {
         }
         j.endArray();
         j.endObject();
+    }
+
+    private static void axes(JsonWriter j, org.phasewright.runtime.ensemble.Axis first,
+            org.phasewright.runtime.ensemble.Axis second) {
+        for (var a : List.of(first, second)) {
+            j.name(a == first ? "first" : "second").beginObject().field("name", a.name()).field("from", a.from())
+                    .field("to", a.to()).field("steps", a.steps()).endObject();
+        }
     }
 
     private static void equilibrium(JsonWriter j, Equilibrium q) {

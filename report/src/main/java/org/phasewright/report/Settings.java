@@ -18,6 +18,8 @@ import org.phasewright.runtime.study.LyapunovResult;
 import org.phasewright.runtime.study.SectionResult;
 import org.phasewright.runtime.study.SimulationResult;
 import org.phasewright.runtime.study.SweepResult;
+import org.phasewright.runtime.study.LyapunovMapResult;
+import org.phasewright.runtime.study.BasinsResult;
 
 /** The settings of an analysis as the report shows them: from the result, and from the declaration when known. */
 final class Settings {
@@ -32,6 +34,8 @@ final class Settings {
             case LyapunovResult l -> "lyapunov";
             case ContinuationResult c -> "continuation";
             case SweepResult w -> "sweep";
+            case LyapunovMapResult m -> "lyapunov-map";
+            case BasinsResult b -> "basins";
         };
     }
 
@@ -43,6 +47,8 @@ final class Settings {
             case LyapunovResult l -> "Lyapunov exponents";
             case ContinuationResult c -> "Continuation of equilibria";
             case SweepResult w -> "Orbit diagram";
+            case LyapunovMapResult m -> "Lyapunov map";
+            case BasinsResult b -> "Basins of attraction";
         };
     }
 
@@ -104,8 +110,34 @@ final class Settings {
                     m.put("method", "local maxima after the first half of each run (Dormand–Prince 5(4))");
                 }
             }
+            case LyapunovMapResult l -> {
+                if (l.first() != null) {
+                    grid(m, l.first(), l.second(), l.endTime(), l.executor());
+                    m.put("method", "largest exponent from one tangent vector of the variational equations, "
+                            + "renormalised at intervals (Dormand–Prince 8), at every grid point");
+                }
+            }
+            case BasinsResult b -> {
+                if (b.first() != null) {
+                    grid(m, b.first(), b.second(), b.endTime(), b.executor());
+                    m.put("method", "each start integrated (Dormand–Prince 5(4)) and labelled by the equilibrium "
+                            + "its final state lies on");
+                }
+            }
         }
         return m;
+    }
+
+    private static void grid(Map<String, Object> m, org.phasewright.runtime.ensemble.Axis first,
+            org.phasewright.runtime.ensemble.Axis second, double endTime, String executor) {
+        m.put("first", first.name() + " from " + Formats.plain(first.from()) + " to " + Formats.plain(first.to())
+                + ", " + first.steps() + " values");
+        m.put("second", second.name() + " from " + Formats.plain(second.from()) + " to "
+                + Formats.plain(second.to()) + ", " + second.steps() + " values");
+        m.put("endTime", endTime);
+        if (executor != null) {
+            m.put("ranOn", executor);
+        }
     }
 
     static String method(IntegrationMethod m) {

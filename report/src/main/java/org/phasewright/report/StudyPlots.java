@@ -14,6 +14,8 @@ import org.phasewright.runtime.study.LyapunovResult;
 import org.phasewright.runtime.study.SectionResult;
 import org.phasewright.runtime.study.SimulationResult;
 import org.phasewright.runtime.study.SweepResult;
+import org.phasewright.runtime.study.LyapunovMapResult;
+import org.phasewright.runtime.study.BasinsResult;
 import org.phasewright.runtime.study.StudyResult;
 import org.phasewright.runtime.study.Trajectory;
 
@@ -31,7 +33,7 @@ final class StudyPlots {
         String head = study.modelName() + " · " + study.studyName();
         String time = timeLabel(study, context.model());
         List<Plot> plots = new ArrayList<>();
-        int simulation = 0, section = 0, lyapunov = 0, continuation = 0, sweep = 0;
+        int simulation = 0, section = 0, lyapunov = 0, continuation = 0, sweep = 0, map = 0, basins = 0;
         boolean projected = false;
         List<AnalysisResult> results = study.results();
         for (int a = 0; a < results.size(); a++) {
@@ -100,6 +102,31 @@ final class StudyPlots {
                                     + " after transients, for each value of " + w.sweep().parameterName() + ".",
                             Charts.seriesNames(chart), a, chart));
                 }
+                case LyapunovMapResult m -> {
+                    if (m.first() == null || m.points().isEmpty()) {
+                        break;
+                    }
+                    map++;
+                    var chart = HeatmapChart.lyapunov(m, head + ": Lyapunov map over " + m.first().name() + " and "
+                            + m.second().name(), m.message());
+                    plots.add(new Plot("lyapunov-map" + (map > 1 ? "-" + map : ""), "lyapunov-map",
+                            chart.getTitle().getText(), "Largest Lyapunov exponent at each pair of "
+                                    + m.first().name() + " and " + m.second().name()
+                                    + "; red chaotic (positive), white neutral, blue settling (negative).",
+                            List.of("largest exponent"), a, chart));
+                }
+                case BasinsResult b -> {
+                    if (b.first() == null || b.points().isEmpty()) {
+                        break;
+                    }
+                    basins++;
+                    var chart = HeatmapChart.basins(b, head + ": basins over " + b.first().name() + " and "
+                            + b.second().name(), b.message());
+                    plots.add(new Plot("basins" + (basins > 1 ? "-" + basins : ""), "basins",
+                            chart.getTitle().getText(), "Each start of " + b.first().name() + " and "
+                                    + b.second().name() + " coloured by the equilibrium it settles on.",
+                            basinSeries(b), a, chart));
+                }
                 case EquilibriumResult e -> {
                     // Marked on the phase projections; drawn alone below when the study has no trajectory.
                 }
@@ -134,6 +161,12 @@ final class StudyPlots {
             }
         }
         return plots;
+    }
+
+    private static List<String> basinSeries(BasinsResult b) {
+        List<String> names = new ArrayList<>(b.equilibria().stream().map(Equilibrium::name).toList());
+        names.add("no equilibrium reached");
+        return names;
     }
 
     private static Plot projection(StudyResult study, ReportContext context, Trajectory t, int[] p,
@@ -211,7 +244,9 @@ final class StudyPlots {
         for (int s = 0; s < study.stateNames().size(); s++) {
             String name = study.stateNames().get(s);
             String unit = null;
-            if (model != null) {
+            if (model != null && s < model.states().size() && model.states().get(s).name().equals(name)) {
+                unit = model.states().get(s).unit(); // same order: no scan per state (10^6 states would be 10^12)
+            } else if (model != null) {
                 for (StateVariable v : model.states()) {
                     if (v.name().equals(name)) {
                         unit = v.unit();

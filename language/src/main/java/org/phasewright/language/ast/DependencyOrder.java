@@ -38,6 +38,7 @@ public final class DependencyOrder<T extends Symbol> {
         return of(PhaseModels.params(model), ParamDecl.class, param -> {
             List<EObject> parts = new ArrayList<>();
             parts.add(param.getValue());
+            parts.addAll(param.getValues());
             parts.add(param.getLow());
             parts.add(param.getHigh());
             return parts;

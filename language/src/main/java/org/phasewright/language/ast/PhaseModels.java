@@ -89,8 +89,11 @@ public final class PhaseModels {
         return symbols;
     }
 
-    /** The kind of a symbol in the words used by messages: "state", "param", "let" or "time". */
+    /** The kind of a symbol in the words used by messages: "state", "param", "let", "index" or "time". */
     public static String kindWord(Symbol symbol) {
+        if (symbol instanceof org.phasewright.language.phase.IndexDecl) {
+            return "index";
+        }
         if (symbol instanceof StateDecl) {
             return "state";
         }
@@ -101,6 +104,12 @@ public final class PhaseModels {
             return "let";
         }
         return "time";
+    }
+
+    /** The kind with its article, for "'x' is ...": "a state", "an index". */
+    public static String aKind(Symbol symbol) {
+        String kind = kindWord(symbol);
+        return (kind.equals("index") ? "an " : "a ") + kind;
     }
 
     public static boolean isExpressionRoot(Expression expression) {

@@ -25,6 +25,7 @@ import org.eclipse.xtext.formatting2.regionaccess.ITextSegment;
 import org.eclipse.xtext.preferences.MapBasedPreferenceValues;
 import org.eclipse.xtext.resource.XtextResource;
 import org.eclipse.xtext.xbase.lib.Procedures.Procedure1;
+import org.phasewright.language.ast.Families;
 import org.phasewright.language.phase.Analysis;
 import org.phasewright.language.phase.FunctionCall;
 import org.phasewright.language.phase.Member;
@@ -38,7 +39,9 @@ import org.phasewright.language.phase.StudyDecl;
  * <li>a study's analyses one per line, indented by two spaces, `}` on its own line;</li>
  * <li>single spaces between words and around `=`, `..`, `->`, binary `+` and `-`;</li>
  * <li>no spaces around `*`, `/`, `^`, after unary minus, inside parentheses, before `,` and `:`, or between a
- * function name and its `(`; one space after `,` and `:`;</li>
+ * function name (or `sum`) and its `(`; one space after `,` and `:`;</li>
+ * <li>elements written tight, `x[i+1]`: no space before a subscript's `[`, inside the brackets or around index
+ * arithmetic; a listed table keeps its space after `=`;</li>
  * <li>comments are kept, block comments verbatim; the file ends with one line break.</li>
  * </ul>
  * Indentation ignores editor settings on purpose: the layout is part of the notation, not a preference. A file
@@ -164,7 +167,17 @@ public class PhaseFormatter extends AbstractFormatter2 {
         if (analysisStarts.contains(next) || is(next, "}") || is(previous, "{")) {
             return NEW_LINE;
         }
-        if (is(next, ",") || is(next, ")") || is(next, ":") || is(previous, "(")) {
+        if (is(next, ",") || is(next, ")") || is(next, ":") || is(previous, "(") || is(next, "]")
+                || is(previous, "[")) {
+            return NO_SPACE;
+        }
+        if (is(next, "[") && !(previous.getGrammarElement() instanceof Keyword)) {
+            return NO_SPACE;
+        }
+        if (isSubscriptOperator(previous) || isSubscriptOperator(next)) {
+            return NO_SPACE;
+        }
+        if (is(next, "(") && is(previous, "sum")) {
             return NO_SPACE;
         }
         if (isTightOperator(previous) || isTightOperator(next) || isUnaryMinus(previous)) {
@@ -194,6 +207,12 @@ public class PhaseFormatter extends AbstractFormatter2 {
             case "*", "/", "^" -> true;
             default -> false;
         };
+    }
+
+    /** `+` and `-` of index arithmetic inside `[...]`. */
+    private static boolean isSubscriptOperator(ISemanticRegion region) {
+        return (is(region, "+") || is(region, "-")) && ruleOf(region).equals("Additive")
+                && Families.inSubscript(region.getSemanticElement());
     }
 
     private static boolean isUnaryMinus(ISemanticRegion region) {

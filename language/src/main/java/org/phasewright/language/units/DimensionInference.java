@@ -11,16 +11,19 @@ import java.util.function.Consumer;
 import org.eclipse.emf.ecore.EObject;
 import org.eclipse.xtext.EcoreUtil2;
 import org.eclipse.xtext.nodemodel.util.NodeModelUtils;
+import org.phasewright.language.ast.Families;
 import org.phasewright.language.ast.PhaseModels;
 import org.phasewright.language.lowering.ConstantValues;
 import org.phasewright.language.phase.BinaryExpr;
 import org.phasewright.language.phase.Expression;
 import org.phasewright.language.phase.FunctionCall;
+import org.phasewright.language.phase.IndexDecl;
 import org.phasewright.language.phase.LetDecl;
 import org.phasewright.language.phase.Negation;
 import org.phasewright.language.phase.NumberLiteral;
 import org.phasewright.language.phase.PhaseModel;
 import org.phasewright.language.phase.PiConstant;
+import org.phasewright.language.phase.SumExpr;
 import org.phasewright.language.phase.Symbol;
 import org.phasewright.language.phase.SymbolRef;
 import org.phasewright.runtime.units.Dimension;
@@ -82,8 +85,10 @@ public final class DimensionInference {
             return cached;
         }
         Optional<Dimension> result;
-        if (symbol.getUnit() != null) {
-            result = UnitResolver.resolve(symbol.getUnit()).map(Unit::dimension);
+        if (symbol instanceof IndexDecl) {
+            result = Optional.of(Dimension.NONE); // index values are plain numbers
+        } else if (Families.unitOf(symbol) != null) {
+            result = UnitResolver.resolve(Families.unitOf(symbol)).map(Unit::dimension);
         } else if (symbol instanceof LetDecl let && inferring.add(let)) { // a cycle is the cycle check's to report
             Inferred definition = infer(let.getDefinition(), p -> { });
             // Numbers alone say nothing about the unit meant, as for a param without `in`.
@@ -114,7 +119,12 @@ public final class DimensionInference {
             return Inferred.NUMBER;
         }
         if (e instanceof SymbolRef ref) {
-            return new Inferred(ofSymbol(ref.getSymbol()).orElse(null), false);
+            // An index value is a number like a literal; an element has its family's unit.
+            return ref.getSymbol() instanceof IndexDecl ? Inferred.NUMBER
+                    : new Inferred(ofSymbol(ref.getSymbol()).orElse(null), false);
+        }
+        if (e instanceof SumExpr sum) {
+            return infer(sum.getBody(), problems); // a sum has the dimension of its terms
         }
         if (e instanceof Negation negation) {
             return infer(negation.getOperand(), problems);

@@ -9,17 +9,22 @@ import java.util.stream.Collectors;
 import org.eclipse.emf.ecore.EObject;
 import org.eclipse.xtext.validation.Check;
 import org.phasewright.language.ast.DependencyOrder;
+import org.phasewright.language.ast.Families;
 import org.phasewright.language.ast.PhaseModels;
+import org.phasewright.language.phase.BasinsRequest;
 import org.phasewright.language.phase.Expression;
 import org.phasewright.language.phase.FollowRequest;
 import org.phasewright.language.phase.FunctionCall;
+import org.phasewright.language.phase.GridSpan;
+import org.phasewright.language.phase.IndexDecl;
+import org.phasewright.language.phase.LyapunovMapRequest;
+import org.phasewright.language.phase.LyapunovRequest;
 import org.phasewright.language.phase.ParamDecl;
 import org.phasewright.language.phase.PhaseModel;
-import org.phasewright.language.phase.LyapunovRequest;
 import org.phasewright.language.phase.SimulateRequest;
-import org.phasewright.language.phase.SweepRequest;
 import org.phasewright.language.phase.StateDecl;
 import org.phasewright.language.phase.StateMap;
+import org.phasewright.language.phase.SweepRequest;
 import org.phasewright.language.phase.Symbol;
 import org.phasewright.language.phase.SymbolRef;
 import org.phasewright.runtime.model.MathFunction;
@@ -53,7 +58,8 @@ public class ExpressionChecks extends PhaseCheckBase {
     @Check
     public void referenceAllowedHere(SymbolRef ref) {
         Symbol symbol = ref.getSymbol();
-        if (symbol == null || symbol.eIsProxy()) {
+        // Index values and subscripts are integers fixed before the run; IndexChecks owns where they may appear.
+        if (symbol == null || symbol.eIsProxy() || symbol instanceof IndexDecl || Families.inSubscript(ref)) {
             return;
         }
         EObject owner = ref;
@@ -67,11 +73,11 @@ public class ExpressionChecks extends PhaseCheckBase {
                 || top.eContainingFeature() == PHASE.getSimulateRequest_StopLevel();
         String place = stopCondition ? null : constantPlace(owner);
         if (place != null && !(symbol instanceof ParamDecl)) {
-            error(place + " may use only params; '" + symbol.getName() + "' is a " + PhaseModels.kindWord(symbol)
+            error(place + " may use only params; '" + symbol.getName() + "' is " + PhaseModels.aKind(symbol)
                     + ".", ref, PHASE.getSymbolRef_Symbol(), IssueCodes.NOT_CONSTANT);
         } else if (owner instanceof StateMap && !(symbol instanceof StateDecl)) {
-            error("A symmetry image may use only states; '" + symbol.getName() + "' is a "
-                    + PhaseModels.kindWord(symbol) + ".", ref, PHASE.getSymbolRef_Symbol(), IssueCodes.NOT_CONSTANT);
+            error("A symmetry image may use only states; '" + symbol.getName() + "' is "
+                    + PhaseModels.aKind(symbol) + ".", ref, PHASE.getSymbolRef_Symbol(), IssueCodes.NOT_CONSTANT);
         }
     }
 
@@ -93,6 +99,12 @@ public class ExpressionChecks extends PhaseCheckBase {
         }
         if (owner instanceof SweepRequest) {
             return "A sweep setting";
+        }
+        if (owner instanceof GridSpan || owner instanceof LyapunovMapRequest || owner instanceof BasinsRequest) {
+            return "A grid setting";
+        }
+        if (owner instanceof IndexDecl index) {
+            return "The bounds of index '" + index.getName() + "'";
         }
         return null;
     }

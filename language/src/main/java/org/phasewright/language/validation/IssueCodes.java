@@ -45,4 +45,24 @@ public final class IssueCodes {
     public static final String SYMMETRY_VERIFIED = PREFIX + "symmetryVerified";
     public static final String SYMMETRY_UNVERIFIED = PREFIX + "symmetryUnverified";
     public static final String SYMMETRY_DISCOVERED = PREFIX + "symmetryDiscovered";
+    // Indexed families (IndexChecks, StudyChecks).
+    public static final String INDEX_KIND_MISSING = PREFIX + "indexKindMissing";
+    public static final String BAD_INDEX_BOUND = PREFIX + "badIndexBound";
+    public static final String EMPTY_INDEX = PREFIX + "emptyIndex";
+    public static final String INDEX_TOO_LARGE = PREFIX + "indexTooLarge";
+    public static final String FAMILY_WITHOUT_INDEX = PREFIX + "familyWithoutIndex";
+    public static final String SCALAR_WITH_INDEX = PREFIX + "scalarWithIndex";
+    public static final String INDEX_NOT_BOUND = PREFIX + "indexNotBound";
+    public static final String BAD_INDEX_EXPRESSION = PREFIX + "badIndexExpression";
+    public static final String SUM_REBINDS_INDEX = PREFIX + "sumRebindsIndex";
+    public static final String RATE_INDEX_MISMATCH = PREFIX + "rateIndexMismatch";
+    public static final String MAP_INDEX_MISMATCH = PREFIX + "mapIndexMismatch";
+    public static final String TABLE_SIZE_MISMATCH = PREFIX + "tableSizeMismatch";
+    public static final String LISTED_WITHOUT_INDEX = PREFIX + "listedWithoutIndex";
+    public static final String TABLE_WITH_RANGE = PREFIX + "tableWithRange";
+    public static final String BAD_LEADING = PREFIX + "badLeading";
+    public static final String GRID_VARIABLE = PREFIX + "gridVariable";
+    public static final String BAD_GRID_STEPS = PREFIX + "badGridSteps";
+    // Info: a declared symmetry of a large indexed model is not checked element by element.
+    public static final String SYMMETRY_NOT_CHECKED = PREFIX + "symmetryNotChecked";
 }

@@ -84,7 +84,7 @@ public class NameChecks extends PhaseCheckBase {
 
     private static String describe(Member member) {
         if (member instanceof Symbol symbol) {
-            return "a " + PhaseModels.kindWord(symbol);
+            return PhaseModels.aKind(symbol);
         }
         return member instanceof SymmetryDecl ? "a symmetry" : "a study";
     }

@@ -13,7 +13,7 @@ import org.eclipse.xtext.validation.ComposedChecks;
  * All checks of a `.phase` model. Each composed class owns one concern so that rules stay small and testable.
  */
 @ComposedChecks(validators = { NameChecks.class, StructureChecks.class, ExpressionChecks.class, StudyChecks.class,
-        ValueChecks.class, UnitChecks.class, SymmetryChecks.class })
+        ValueChecks.class, UnitChecks.class, SymmetryChecks.class, IndexChecks.class })
 public class PhaseValidator extends AbstractPhaseValidator {
     private static final String TOO_DEEP_KEY = ExpressionDepth.class.getName();
 

@@ -34,7 +34,7 @@ public class StructureChecks extends PhaseCheckBase {
                 continue;
             }
             if (!(target instanceof StateDecl)) {
-                error("'" + target.getName() + "' is a " + PhaseModels.kindWord(target)
+                error("'" + target.getName() + "' is " + PhaseModels.aKind(target)
                         + ", not a state; only states have rates.", rate, PHASE.getRateDecl_Target(),
                         IssueCodes.RATE_OF_NON_STATE);
                 continue;
@@ -47,7 +47,9 @@ public class StructureChecks extends PhaseCheckBase {
         }
         for (StateDecl state : PhaseModels.states(model)) {
             if (!rateOf.containsKey(state) && state.getName() != null) {
-                error("State '" + state.getName() + "' has no rate; add `rate " + state.getName() + " = ...`.", state,
+                String target = state.getIndex() == null || state.getIndex().eIsProxy() ? state.getName()
+                        : state.getName() + "[" + state.getIndex().getName() + "]";
+                error("State '" + state.getName() + "' has no rate; add `rate " + target + " = ...`.", state,
                         PHASE.getSymbol_Name(), IssueCodes.MISSING_RATE, state.getName());
             }
         }
@@ -62,7 +64,7 @@ public class StructureChecks extends PhaseCheckBase {
                 continue;
             }
             if (!(target instanceof StateDecl)) {
-                error("A symmetry maps states; '" + target.getName() + "' is a " + PhaseModels.kindWord(target) + ".",
+                error("A symmetry maps states; '" + target.getName() + "' is " + PhaseModels.aKind(target) + ".",
                         map, PHASE.getStateMap_State(), IssueCodes.SYMMETRY_OF_NON_STATE);
             } else if (!mapped.add(target)) {
                 error("State '" + target.getName() + "' is mapped twice in symmetry '" + symmetry.getName() + "'.", map,

@@ -6,12 +6,18 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.OptionalLong;
 import java.util.Set;
 
 import org.eclipse.xtext.EcoreUtil2;
 import org.eclipse.xtext.validation.Check;
 import org.phasewright.language.ast.PhaseModels;
+import org.phasewright.language.lowering.ConstantValues;
+import org.phasewright.language.lowering.FlatLayout;
+import org.phasewright.language.lowering.IndexRanges;
 import org.phasewright.language.lowering.ModelLowering;
+import org.phasewright.language.phase.IndexDecl;
 import org.phasewright.language.phase.PhaseModel;
 import org.phasewright.language.phase.RateDecl;
 import org.phasewright.language.phase.StateDecl;
@@ -30,9 +36,17 @@ import org.phasewright.runtime.symmetry.SymmetryDiscovery;
  * with structural errors gets those first.
  */
 public class SymmetryChecks extends PhaseCheckBase {
+    /**
+     * Above this many states a declared symmetry is not checked: the check expands every rate and samples the
+     * field, which for a lattice of 10^6 cells would stall the editor. Checking a smaller copy of the lattice is
+     * not sound in general (tables and formulas may depend on the size), so the user is told instead.
+     */
+    static final int MAX_CHECKED_DIMENSION = 500;
+    /** Discovery searches signed permutations; on indexed models it is kept to small lattices. */
+    static final int MAX_DISCOVERY_DIMENSION_INDEXED = 200;
 
     /** The lowered model and the prepared check, shared by all checks of one validation run. */
-    private record Prepared(DynamicalModel model, PreparedField field, EquivarianceCheck check,
+    private record Prepared(DynamicalModel model, FlatLayout layout, PreparedField field, EquivarianceCheck check,
             Map<Integer, EquivarianceVerdict> verdicts) {
         /** The verdict on declared symmetry {@code index}, computed once for both checks below. */
         EquivarianceVerdict verdict(int index, LinearMap g) {
@@ -52,6 +66,14 @@ public class SymmetryChecks extends PhaseCheckBase {
 
     private void checkDeclared(SymmetryDecl decl) {
         PhaseModel phase = EcoreUtil2.getContainerOfType(decl, PhaseModel.class);
+        OptionalLong size = expandedSize(phase);
+        if (size.isPresent() && size.getAsLong() > MAX_CHECKED_DIMENSION) {
+            info("Symmetry '" + decl.getName() + "' is not checked: the model expands to " + size.getAsLong()
+                    + " states (or terms of a sum) and symmetries are checked element by element only up to "
+                    + MAX_CHECKED_DIMENSION + "; declare the same model with a smaller index range to check it.",
+                    decl, PHASE.getSymmetryDecl_Name(), IssueCodes.SYMMETRY_NOT_CHECKED);
+            return;
+        }
         Prepared prepared = prepared(phase);
         int index = PhaseModels.symmetries(phase).indexOf(decl);
         if (prepared == null || index < 0 || index >= prepared.model().symmetries().size()) {
@@ -61,7 +83,7 @@ public class SymmetryChecks extends PhaseCheckBase {
         int states = prepared.model().dimension();
         Optional<Integer> nonlinear = LinearMap.nonlinearImage(symmetry, states);
         if (nonlinear.isPresent()) {
-            StateMap map = mapOf(decl, PhaseModels.states(phase).get(nonlinear.get()));
+            StateMap map = mapOf(decl, prepared.layout().stateAt(nonlinear.get()));
             String state = prepared.model().states().get(nonlinear.get()).name();
             error("A symmetry is a linear map: the image of '" + state + "' must be a combination of states with "
                     + "constant factors, such as `" + state + " -> -" + state + "`.", map == null ? decl : map,
@@ -85,7 +107,7 @@ public class SymmetryChecks extends PhaseCheckBase {
                     IssueCodes.SYMMETRY_UNVERIFIED);
             case BROKEN -> {
                 String state = prepared.model().states().get(verdict.brokenRate()).name();
-                RateDecl rate = rateOf(phase, PhaseModels.states(phase).get(verdict.brokenRate()));
+                RateDecl rate = rateOf(phase, prepared.layout().stateAt(verdict.brokenRate()));
                 String message = "This rate breaks symmetry '" + decl.getName() + "' (" + law + "): for the rate of "
                         + state + ", f(g·u) = " + verdict.leftSide() + " but " + (decl.isReversesTime() ? "−" : "")
                         + "g·f(u) = " + verdict.rightSide() + "; checked " + verdict.methodText() + ".";
@@ -107,6 +129,12 @@ public class SymmetryChecks extends PhaseCheckBase {
     }
 
     private void discover(PhaseModel phase) {
+        boolean indexed = !PhaseModels.membersOf(phase, IndexDecl.class).isEmpty();
+        OptionalLong size = expandedSize(phase);
+        if (size.isEmpty() || size.getAsLong() > MAX_CHECKED_DIMENSION
+                || (indexed && size.getAsLong() > MAX_DISCOVERY_DIMENSION_INDEXED)) {
+            return;
+        }
         Prepared prepared = prepared(phase);
         if (prepared == null) {
             return;
@@ -142,13 +170,39 @@ public class SymmetryChecks extends PhaseCheckBase {
 
     private static Optional<Prepared> prepare(PhaseModel phase) {
         try {
+            OptionalLong size = expandedSize(phase);
+            if (size.isEmpty() || size.getAsLong() > MAX_CHECKED_DIMENSION) {
+                return Optional.empty();
+            }
             DynamicalModel model = new ModelLowering().lower(phase);
             PreparedField field = PreparedField.of(model);
-            return Optional.of(new Prepared(model, field, new EquivarianceCheck(field, model.time().name()),
-                    new HashMap<>()));
+            return Optional.of(new Prepared(model, FlatLayout.of(phase), field,
+                    new EquivarianceCheck(field, model.time().name()), new HashMap<>()));
         } catch (RuntimeException notReady) { // errors elsewhere in the model, reported by their own checks
             return Optional.empty();
         }
+    }
+
+    /**
+     * What the element-by-element check has to expand: the number of states, or the largest index range when that
+     * is larger (a sum over it becomes one term per value). Empty when a range is not known.
+     */
+    private static OptionalLong expandedSize(PhaseModel phase) {
+        OptionalLong dimension = StudyChecks.dimension(phase);
+        if (dimension.isEmpty()) {
+            return dimension;
+        }
+        long largest = dimension.getAsLong();
+        ConstantValues constants = ConstantValues.of(phase);
+        for (IndexDecl index : PhaseModels.membersOf(phase, IndexDecl.class)) {
+            OptionalDouble lower = IndexRanges.bound(index.getLower(), constants);
+            OptionalDouble upper = IndexRanges.bound(index.getUpper(), constants);
+            if (lower.isEmpty() || upper.isEmpty()) {
+                return OptionalLong.empty();
+            }
+            largest = Math.max(largest, (long) upper.getAsDouble() - (long) lower.getAsDouble() + 1);
+        }
+        return OptionalLong.of(largest);
     }
 
     private static StateMap mapOf(SymmetryDecl decl, StateDecl state) {

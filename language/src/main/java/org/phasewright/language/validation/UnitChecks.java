@@ -6,9 +6,13 @@ import org.eclipse.emf.ecore.EObject;
 import org.eclipse.emf.ecore.EStructuralFeature;
 import org.eclipse.xtext.EcoreUtil2;
 import org.eclipse.xtext.validation.Check;
+import org.phasewright.language.ast.Families;
 import org.phasewright.language.ast.PhaseModels;
+import org.phasewright.language.phase.BasinsRequest;
 import org.phasewright.language.phase.Expression;
+import org.phasewright.language.phase.GridSpan;
 import org.phasewright.language.phase.LetDecl;
+import org.phasewright.language.phase.LyapunovMapRequest;
 import org.phasewright.language.phase.LyapunovRequest;
 import org.phasewright.language.phase.ParamDecl;
 import org.phasewright.language.phase.PhaseModel;
@@ -19,8 +23,8 @@ import org.phasewright.language.phase.StateDecl;
 import org.phasewright.language.phase.StateMap;
 import org.phasewright.language.phase.Symbol;
 import org.phasewright.language.phase.UnitFactor;
-import org.phasewright.language.units.DimensionInference;
 import org.phasewright.language.units.DimensionInference.Inferred;
+import org.phasewright.language.units.DimensionInference;
 import org.phasewright.runtime.units.Dimension;
 import org.phasewright.runtime.units.UnitCatalogue;
 
@@ -54,6 +58,9 @@ public class UnitChecks extends PhaseCheckBase {
     public void paramValueAndRange(ParamDecl param) {
         Optional<Dimension> declared = declared(param);
         value(param.getValue(), declared, "Param '" + param.getName() + "'", IssueCodes.WRONG_VALUE_DIMENSION);
+        for (Expression listed : param.getValues()) {
+            value(listed, declared, "Table '" + param.getName() + "'", IssueCodes.WRONG_VALUE_DIMENSION);
+        }
         for (Expression bound : new Expression[] { param.getLow(), param.getHigh() }) {
             value(bound, declared, "The range of param '" + param.getName() + "'", IssueCodes.WRONG_RANGE_DIMENSION);
         }
@@ -123,6 +130,33 @@ public class UnitChecks extends PhaseCheckBase {
                 IssueCodes.WRONG_VALUE_DIMENSION);
     }
 
+    @Check
+    public void lyapunovMapSettings(LyapunovMapRequest map) {
+        grid(map.getFirst(), map.getSecond(), map.getEnd(), map.getTolerance());
+    }
+
+    @Check
+    public void basinsSettings(BasinsRequest basins) {
+        grid(basins.getFirst(), basins.getSecond(), basins.getEnd(), basins.getTolerance());
+    }
+
+    /** Grid ends are values of the quantity varied; the end time is in the time unit. */
+    private void grid(GridSpan first, GridSpan second, Expression end, Expression tolerance) {
+        for (GridSpan span : new GridSpan[] { first, second }) {
+            if (span == null || span.getVariable() == null) {
+                continue;
+            }
+            Optional<Dimension> expected = inference(span).ofSymbol(span.getVariable());
+            String what = "The grid of '" + span.getVariable().getName() + "'";
+            value(span.getFrom(), expected, what, IssueCodes.WRONG_VALUE_DIMENSION);
+            value(span.getTo(), expected, what, IssueCodes.WRONG_VALUE_DIMENSION);
+        }
+        if (end != null) {
+            value(end, inference(end).timeDimension(), "The end time", IssueCodes.WRONG_VALUE_DIMENSION);
+        }
+        value(tolerance, Optional.of(Dimension.NONE), "The tolerance", IssueCodes.WRONG_VALUE_DIMENSION);
+    }
+
     /** The image of a state under a symmetry has that state's dimension. */
     @Check
     public void symmetryImage(StateMap map) {
@@ -155,7 +189,7 @@ public class UnitChecks extends PhaseCheckBase {
     }
 
     private Optional<Dimension> declared(Symbol symbol) {
-        return symbol.getUnit() == null ? Optional.empty() : inference(symbol).ofSymbol(symbol);
+        return Families.unitOf(symbol) == null ? Optional.empty() : inference(symbol).ofSymbol(symbol);
     }
 
     private static PhaseModel model(EObject inside) {

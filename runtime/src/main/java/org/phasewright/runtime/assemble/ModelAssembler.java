@@ -68,7 +68,9 @@ public final class ModelAssembler {
     /** A derived quantity; a definition with sums or family elements is also kept as a one-element family. */
     public Variable derived(String derivedName, Expr definition, String unit) {
         int index = derived.size();
-        derived.add(new DerivedQuantity(derivedName, IndexExpansion.expand(definition, Map.of()), unit));
+        // expanded on demand: a scalar sum over 10^6 elements would otherwise be built whenever a model is lowered
+        derived.addGenerated(1, k -> new DerivedQuantity(derivedName, IndexExpansion.expand(definition, Map.of()),
+                unit));
         if (IndexExpansion.indexed(definition)) {
             register(new Family(VariableKind.DERIVED, derivedName, single(derivedName), index, definition));
         }
@@ -211,7 +213,7 @@ public final class ModelAssembler {
             Family withLaw = new Family(f.kind(), f.name(), f.range(), f.offset(), law);
             finalFamilies.add(withLaw);
             if (f.size() == 1 && f.range().name().startsWith("_")) {
-                rates.add(IndexExpansion.expand(law, Map.of()));
+                rates.addGenerated(1, k -> IndexExpansion.expand(law, Map.of()));
             } else {
                 rates.addGenerated(f.size(), k -> expandAt(law, f.range(), k));
             }

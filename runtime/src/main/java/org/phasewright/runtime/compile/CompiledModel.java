@@ -25,7 +25,7 @@ public final class CompiledModel {
     CompiledModel(DynamicalModel model, VectorField field, DerivedValues derivedValues, double[] parameters,
             double[] initialState, boolean autonomous, Backend backend, String note, String generatedSource) {
         this.model = model;
-        this.field = field;
+        this.field = SparseJacobians.attach(model, field); // large or indexed models: sparse Jacobian too
         this.derivedValues = derivedValues;
         this.parameters = parameters.clone();
         this.initialState = initialState.clone();

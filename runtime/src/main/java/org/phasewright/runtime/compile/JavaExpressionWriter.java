@@ -19,12 +19,41 @@ import org.phasewright.runtime.symbolic.Arithmetic;
  * text cannot inject code. Everything is parenthesised so operator precedence never depends on the printer.
  */
 final class JavaExpressionWriter {
+    /** Writes the indexed forms, which need the enclosing loops; see {@link FamilyLoopWriter}. */
+    interface Indexed {
+        void indexValue(IndexValue i, StringBuilder out);
+
+        void element(Element el, StringBuilder out);
+
+        void sum(Sum s, StringBuilder out);
+
+        /** Writes {@code v} and returns true, or returns false to let the writer print it as usual. */
+        default boolean variable(Variable v, StringBuilder out) {
+            return false;
+        }
+    }
+
     /** Exponents n for which a helper {@code pw<n>} is needed. */
     private final BitSet powersUsed = new BitSet();
+    /** Derived quantities as locals {@code d<k>} (scalar code) or as elements {@code dv[k]} of an array. */
+    private final boolean derivedInArray;
+
+    JavaExpressionWriter() {
+        this(false);
+    }
+
+    JavaExpressionWriter(boolean derivedInArray) {
+        this.derivedInArray = derivedInArray;
+    }
 
     String write(Expr e) {
+        return write(e, null);
+    }
+
+    /** @param indexed writes index values, elements and sums; null where only scalar expressions may appear */
+    String write(Expr e, Indexed indexed) {
         StringBuilder out = new StringBuilder();
-        write(e, out);
+        write(e, out, indexed);
         return out.toString();
     }
 
@@ -32,28 +61,30 @@ final class JavaExpressionWriter {
         return powersUsed;
     }
 
-    private void write(Expr e, StringBuilder out) {
+    private void write(Expr e, StringBuilder out, Indexed ix) {
         switch (e) {
             case Constant c -> out.append(literal(c.value()));
+            case Variable v when ix != null && ix.variable(v, out) -> { }
             case Variable v -> {
                 switch (v.kind()) {
                     case STATE -> out.append("u[").append(v.index()).append(']');
                     case PARAMETER -> out.append("p[").append(v.index()).append(']');
-                    case DERIVED -> out.append('d').append(v.index());
+                    case DERIVED -> out.append(derivedInArray ? "dv[" : "d").append(v.index())
+                            .append(derivedInArray ? "]" : "");
                     case TIME -> out.append('t');
                 }
             }
             case Negation n -> {
                 out.append("(-");
-                write(n.operand(), out);
+                write(n.operand(), out, ix);
                 out.append(')');
             }
-            case Binary b when b.operator() == BinaryOperator.POWER -> power(b, out);
+            case Binary b when b.operator() == BinaryOperator.POWER -> power(b, out, ix);
             case Binary b -> {
                 out.append('(');
-                write(b.left(), out);
+                write(b.left(), out, ix);
                 out.append(' ').append(b.operator().symbol()).append(' ');
-                write(b.right(), out);
+                write(b.right(), out, ix);
                 out.append(')');
             }
             case Call c -> {
@@ -62,13 +93,28 @@ final class JavaExpressionWriter {
                     if (i > 0) {
                         out.append(", ");
                     }
-                    write(c.arguments().get(i), out);
+                    write(c.arguments().get(i), out, ix);
                 }
                 out.append(')');
             }
-            case IndexValue i -> throw unexpanded(i);
-            case Element el -> throw unexpanded(el);
-            case Sum sum -> throw unexpanded(sum);
+            case IndexValue i -> {
+                if (ix == null) {
+                    throw unexpanded(i);
+                }
+                ix.indexValue(i, out);
+            }
+            case Element el -> {
+                if (ix == null) {
+                    throw unexpanded(el);
+                }
+                ix.element(el, out);
+            }
+            case Sum sum -> {
+                if (ix == null) {
+                    throw unexpanded(sum);
+                }
+                ix.sum(sum, out);
+            }
         }
     }
 
@@ -77,13 +123,13 @@ final class JavaExpressionWriter {
     }
 
     /** Mirrors {@link Arithmetic#power}: small integer exponents multiply out, others call Math.pow. */
-    private void power(Binary b, StringBuilder out) {
+    private void power(Binary b, StringBuilder out, Indexed ix) {
         if (b.right() instanceof Constant c) {
             int n = Arithmetic.smallIntegerExponent(c.value());
             if (n != 0) {
                 powersUsed.set(Math.abs(n));
                 out.append(n > 0 ? "pw" : "(1.0 / pw").append(Math.abs(n)).append('(');
-                write(b.left(), out);
+                write(b.left(), out, ix);
                 out.append(n > 0 ? ")" : "))");
                 return;
             }
@@ -91,9 +137,9 @@ final class JavaExpressionWriter {
         } else {
             out.append("org.phasewright.runtime.symbolic.Arithmetic.power(");
         }
-        write(b.left(), out);
+        write(b.left(), out, ix);
         out.append(", ");
-        write(b.right(), out);
+        write(b.right(), out, ix);
         out.append(')');
     }
 

@@ -13,8 +13,9 @@ import org.phasewright.runtime.symbolic.References;
 import org.phasewright.runtime.symbolic.SymbolicJacobian;
 
 /**
- * Java source for a class implementing {@link VectorField} and {@link DerivedValues}. Each method computes, once and
- * in declaration order, only the derived quantities it needs, as final locals {@code d<k>}.
+ * Java source for a class implementing {@link VectorField} and {@link DerivedValues}. Small scalar models get
+ * straight-line methods that compute, once and in declaration order, only the derived quantities they need, as final
+ * locals {@code d<k>}; indexed and large models get {@link LoopedSourceGenerator}'s loops and chunked methods.
  */
 final class JavaSourceGenerator {
     static final String PACKAGE = "phasewright.generated";
@@ -25,13 +26,29 @@ final class JavaSourceGenerator {
     private final List<DerivedQuantity> extended;
     private final JavaExpressionWriter writer = new JavaExpressionWriter();
 
+    /** @param jacobian null when the model is too large for a dense Jacobian */
     JavaSourceGenerator(DynamicalModel model, SymbolicJacobian jacobian) {
         this.model = model;
         this.jacobian = jacobian;
-        this.extended = jacobian.extendedDerived(model);
+        this.extended = jacobian == null ? null : jacobian.extendedDerived(model);
     }
 
     String generate() {
+        return model.indexed() || large(model, jacobian) ? new LoopedSourceGenerator(model, jacobian).generate()
+                : generateScalar();
+    }
+
+    /**
+     * True when straight-line code with one local per derived quantity could exceed the JVM's method limits (64 KB,
+     * and 8000 bytes for the JIT to compile a method at all); such models get the chunked form.
+     */
+    static boolean large(DynamicalModel model, SymbolicJacobian jacobian) {
+        return model.dimension() > 64 || model.derived().size() > 128
+                || (jacobian != null && jacobian.auxiliary().size() > 256);
+    }
+
+    /** Straight-line code: derived quantities as final locals, one line per rate and Jacobian entry. */
+    private String generateScalar() {
         int n = model.dimension();
         int nd = model.derived().size();
         StringBuilder body = new StringBuilder();

@@ -15,6 +15,18 @@ import org.phasewright.runtime.symbolic.SymbolicJacobian;
 
 /** Turns a model into a {@link CompiledModel}: Java source for rates and exact Jacobian, compiled by Janino. */
 public final class ModelCompiler {
+    /**
+     * Above this many states no dense symbolic Jacobian is built (it has n^2 entries): the vector field's
+     * {@code jacobian} then throws UnsupportedOperationException (analyses use the sparse Jacobian long before).
+     */
+    public static final int DENSE_JACOBIAN_LIMIT = 1000;
+    /**
+     * Indexed models above this many states are meant to be analysed with the sparse Jacobian: their expanded sums
+     * make dense symbolic entries large (a sum over the family in every rate gives n^2 entries of n terms). Their
+     * dense Jacobian is still built, on first use ({@link LazyJacobianField}), up to {@link #DENSE_JACOBIAN_LIMIT}.
+     */
+    public static final int INDEXED_DENSE_JACOBIAN_LIMIT = 32;
+
     private ModelCompiler() {
     }
 
@@ -29,7 +41,9 @@ public final class ModelCompiler {
         ModelChecks.check(model);
         double[] parameters = ParameterValues.resolve(model);
         double[] initial = InitialValues.resolve(model, parameters);
-        SymbolicJacobian jacobian = SymbolicJacobian.of(model);
+        // indexed and large models: rates now, the dense Jacobian when first asked for (LazyJacobianField)
+        boolean lazy = model.indexed() || JavaSourceGenerator.large(model, null);
+        SymbolicJacobian jacobian = lazy ? null : SymbolicJacobian.of(model);
         String source = new JavaSourceGenerator(model, jacobian).generate();
         Object instance;
         try {
@@ -40,6 +54,11 @@ public final class ModelCompiler {
             return new CompiledModel(model, interpreter, interpreter, parameters, initial, autonomous(model),
                     CompiledModel.Backend.INTERPRETER, "generated code could not be compiled (" + brief(e)
                     + "); using the interpreter", null);
+        }
+        if (lazy) {
+            LazyJacobianField field = new LazyJacobianField(model, (VectorField) instance, (DerivedValues) instance);
+            return new CompiledModel(model, field, field, parameters, initial, autonomous(model),
+                    CompiledModel.Backend.GENERATED_CODE, null, source);
         }
         return new CompiledModel(model, (VectorField) instance, (DerivedValues) instance, parameters, initial,
                 autonomous(model), CompiledModel.Backend.GENERATED_CODE, null, source);
@@ -55,7 +74,7 @@ public final class ModelCompiler {
                 CompiledModel.Backend.INTERPRETER, null, null);
     }
 
-    private static Object load(String source) throws CompileException, ReflectiveOperationException {
+    static Object load(String source) throws CompileException, ReflectiveOperationException {
         SimpleCompiler compiler = new SimpleCompiler();
         compiler.setParentClassLoader(VectorField.class.getClassLoader());
         compiler.cook(source);
@@ -71,6 +90,9 @@ public final class ModelCompiler {
 
     /** True when no rate depends on time, directly or through derived quantities. */
     static boolean autonomous(DynamicalModel model) {
+        if (model.indexed()) { // by family, without expanding every element
+            return !ModelLayout.of(model).usesTime();
+        }
         boolean[] timed = new boolean[model.derived().size()];
         for (int k = 0; k < timed.length; k++) {
             timed[k] = usesTime(model.derived().get(k).definition(), timed);

@@ -5,11 +5,16 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.function.BooleanSupplier;
 
+import org.phasewright.runtime.compile.SparseJacobian;
 import org.phasewright.runtime.compile.VectorField;
+import org.phasewright.runtime.linalg.SparseMatrix;
 
 /**
  * Finds the equilibria f(x) = 0 reachable by Newton's method from a set of starts, removes duplicates, and
  * classifies each by the eigenvalues of the exact Jacobian. Only meaningful for autonomous models (evaluated at t = 0).
+ * Fields that work sparse ({@link VectorField#large()}) take sparse Newton steps; above
+ * {@link SparseJacobian#DENSE_LIMIT} states their equilibria are not classified (see
+ * {@link LinearStability#notClassified}), below it the dense Jacobian is assembled from the sparse one.
  * Results are sorted by coordinates and named E1, E2, ...; the same model and starts give the same answer.
  */
 public final class EquilibriumFinder {
@@ -33,9 +38,11 @@ public final class EquilibriumFinder {
         int n = field.dimension();
         double[] scales = starts.scales();
         NewtonSolver newton = new NewtonSolver(field, parameters, scales, settings);
-        // Each iteration costs an n×n factorisation (~n³ operations): cap the total near 5e9 operations so a large
-        // system gets fewer iterations instead of running for hours.
-        long budget = Math.min(settings.maxTotalIterations(), Math.max(20L, (long) (5e9 / Math.pow(n + 1, 3))));
+        // Each dense iteration costs an n×n factorisation (~n³ operations): cap the total near 5e9 operations so a
+        // large system gets fewer iterations instead of running for hours. A sparse iteration costs about as much
+        // as a few rate evaluations, so the settings alone limit it.
+        long budget = newton.sparse() ? settings.maxTotalIterations()
+                : Math.min(settings.maxTotalIterations(), Math.max(20L, (long) (5e9 / Math.pow(n + 1, 3))));
         List<double[]> roots = new ArrayList<>();
         List<Double> residuals = new ArrayList<>();
         long iterations = 0;
@@ -95,15 +102,38 @@ public final class EquilibriumFinder {
         }
         order.sort(Comparator.comparing(i -> roots.get(i), EquilibriumFinder::lexicographic));
         List<Equilibrium> equilibria = new ArrayList<>();
-        double[] jac = new double[n * n];
+        double[] jac = n > SparseJacobian.DENSE_LIMIT ? null : new double[n * n];
         for (int k = 0; k < order.size(); k++) {
             double[] x = roots.get(order.get(k));
-            field.jacobian(0.0, x, parameters, jac);
-            LinearStability stability = LinearStability.of(jac, n, settings.eigenTolerance());
+            LinearStability stability;
+            if (jac == null) { // n² entries and an n³ eigen-solver are out of reach: say so instead
+                stability = LinearStability.notClassified(n);
+            } else {
+                denseJacobian(x, jac);
+                stability = LinearStability.of(jac, n, settings.eigenTolerance());
+            }
             equilibria.add(new Equilibrium("E" + (k + 1), x, stability.real(), stability.imaginary(),
                     stability.classification(), residuals.get(order.get(k))));
         }
         return new EquilibriumSearchOutcome(ending, equilibria, tried, converged, iterations);
+    }
+
+    /** The dense Jacobian at x; from the sparse one when the field works sparse (it may have no dense form). */
+    private void denseJacobian(double[] x, double[] jac) {
+        SparseJacobian sparse = field.large() ? field.sparseJacobian() : null;
+        if (sparse == null) {
+            field.jacobian(0.0, x, parameters, jac);
+            return;
+        }
+        SparseMatrix m = sparse.newMatrix();
+        sparse.values(0.0, x, parameters, m.values());
+        int n = field.dimension();
+        java.util.Arrays.fill(jac, 0.0);
+        for (int i = 0; i < n; i++) {
+            for (int k = m.pattern().rowStart(i); k < m.pattern().rowEnd(i); k++) {
+                jac[i * n + m.pattern().column(k)] = m.values()[k];
+            }
+        }
     }
 
     private boolean same(double[] a, double[] b, double[] scales) {

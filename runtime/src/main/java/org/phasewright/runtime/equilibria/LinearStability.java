@@ -52,6 +52,15 @@ public final class LinearStability {
         return new LinearStability(re, im, Classification.of(re, im, tolerance));
     }
 
+    /**
+     * For a model too large for a dense eigen-solver: no eigenvalues, and a type that says why, naming the limit
+     * ({@link org.phasewright.runtime.compile.SparseJacobian#DENSE_LIMIT}).
+     */
+    public static LinearStability notClassified(int n) {
+        return new LinearStability(new double[0], new double[0], new Classification("not classified: dimension "
+                + n + " > " + org.phasewright.runtime.compile.SparseJacobian.DENSE_LIMIT, 0, 0, 0));
+    }
+
     /** {re, im}, or null if the QR iteration fails (reported as "unclassified"). */
     private static double[][] eigenvalues(double[] jacobian, int n, double norm) {
         if (norm == 0) { // commons-math refuses the zero matrix; its eigenvalues are all zero

@@ -1,8 +1,10 @@
 package org.phasewright.runtime.equilibria;
 
-import org.phasewright.runtime.linalg.DenseLu;
-
+import org.phasewright.runtime.compile.SparseJacobian;
 import org.phasewright.runtime.compile.VectorField;
+import org.phasewright.runtime.linalg.DenseLu;
+import org.phasewright.runtime.linalg.SparseLu;
+import org.phasewright.runtime.linalg.SparseMatrix;
 
 /**
  * Damped Newton iteration for f(x) = 0 with the exact Jacobian. Each step is halved until ||f||_2 decreases enough
@@ -13,6 +15,9 @@ import org.phasewright.runtime.compile.VectorField;
  * the deflation of Farrell, Birkisson &amp; Funke (SIAM J. Sci. Comput. 37, 2015), which makes known roots repel
  * the iteration so that it converges to a new one. The deflated Newton step is the plain one times
  * 1/(1 − ∇m·δ/m) (their Sherman–Morrison form), and the line search measures m(x)·‖f(x)‖.
+ * <p>
+ * Large models ({@link VectorField#large()}) use the field's sparse Jacobian and a sparse LU instead of n×n arrays;
+ * where that Jacobian is singular the start is abandoned (the normal equations would be dense).
  */
 final class NewtonSolver {
     private static final double ARMIJO = 1e-4;
@@ -28,6 +33,10 @@ final class NewtonSolver {
     private final EquilibriumSettings settings;
     private final double[] f, fTrial, xTrial, jac, delta, normal;
     private final DenseLu lu;
+    /** Non-null on the sparse path (then jac, normal and lu are null). */
+    private final SparseJacobian sparse;
+    private final SparseMatrix sparseJac;
+    private final SparseLu sparseLu;
     final double[] x;
     double residual;
     int iterations;
@@ -53,10 +62,29 @@ final class NewtonSolver {
         f = new double[n];
         fTrial = new double[n];
         xTrial = new double[n];
-        jac = new double[n * n];
         delta = new double[n];
-        normal = new double[n * n];
-        lu = new DenseLu(n);
+        sparse = field.large() ? field.sparseJacobian() : null;
+        if (field.large() && sparse == null) {
+            throw new IllegalArgumentException("a model of " + n + " states needs a sparse Jacobian for Newton");
+        }
+        if (sparse != null) {
+            jac = null;
+            normal = null;
+            lu = null;
+            sparseJac = sparse.newMatrix();
+            sparseLu = new SparseLu(sparseJac.pattern());
+        } else {
+            jac = new double[n * n];
+            normal = new double[n * n];
+            lu = new DenseLu(n);
+            sparseJac = null;
+            sparseLu = null;
+        }
+    }
+
+    /** True when this solver works with the sparse Jacobian. */
+    boolean sparse() {
+        return sparse != null;
     }
 
     /** Iterates from {@code start}; on success {@link #x} holds the root. At most {@code maxIterations} steps. */
@@ -70,7 +98,11 @@ final class NewtonSolver {
         }
         while (iterations < maxIterations) {
             iterations++;
-            field.jacobian(0.0, x, p, jac);
+            if (sparse != null) {
+                sparse.values(0.0, x, p, sparseJac.values());
+            } else {
+                field.jacobian(0.0, x, p, jac);
+            }
             if (!direction()) {
                 return false;
             }
@@ -149,6 +181,16 @@ final class NewtonSolver {
 
     /** Newton direction in {@link #delta}; Levenberg–Marquardt on (J^T J + mu I) when J is singular. */
     private boolean direction() {
+        if (sparse != null) {
+            if (!sparseLu.factor(sparseJac)) {
+                return false;
+            }
+            for (int i = 0; i < n; i++) {
+                delta[i] = -f[i];
+            }
+            sparseLu.solve(delta);
+            return allFinite(delta);
+        }
         if (lu.factor(jac)) {
             for (int i = 0; i < n; i++) {
                 delta[i] = -f[i];
@@ -190,7 +232,13 @@ final class NewtonSolver {
     private boolean converged(double step) {
         residual = normInf(f);
         double jNorm = 0;
-        for (int i = 0; i < n; i++) {
+        if (sparse != null) {
+            for (int i = 0; i < n; i++) {
+                xTrial[i] = Math.abs(x[i]) + floor[i]; // xTrial is free here: the step has been taken
+            }
+            jNorm = sparseJac.weightedRowNorm(xTrial);
+        }
+        for (int i = 0; sparse == null && i < n; i++) {
             double row = 0;
             for (int j = 0; j < n; j++) {
                 row += Math.abs(jac[i * n + j]) * (Math.abs(x[j]) + floor[j]);

@@ -48,7 +48,7 @@ public final class DormandPrince54 implements Integrator {
     private final double[] p;
     private final int n;
     private double[] y, yNew, k1, k7;
-    private final double[] k2, k3, k4, k5, k6, yStage;
+    private final double[] k2, k3, k4, k5, k6, yStage, errPart;
     private final double[] r1, r2, r3, r4, r5; // continuous-extension coefficients of the last step
     private final Dense dense = new Dense();
 
@@ -66,6 +66,7 @@ public final class DormandPrince54 implements Integrator {
         k5 = new double[n];
         k6 = new double[n];
         yStage = new double[n];
+        errPart = new double[n];
         r1 = new double[n];
         r2 = new double[n];
         r3 = new double[n];
@@ -110,6 +111,8 @@ public final class DormandPrince54 implements Integrator {
         }
         double[] rtol = s.relativeTolerances(n);
         double[] atol = s.absoluteTolerances(n);
+        boolean uniformTolerances = s.componentRelativeTolerances() == null
+                && s.componentAbsoluteTolerances() == null;
         double direction = Math.signum(tEnd - t0);
         double hMax = Math.min(s.maxStep(), Math.abs(tEnd - t0));
         double h = direction * (s.initialStep() > 0 ? Math.min(s.initialStep(), hMax) : initialStep(t, hMax,
@@ -163,20 +166,41 @@ public final class DormandPrince54 implements Integrator {
             }
             double tNew = last ? tEnd : t + h;
             field.rates(tNew, yStage, p, k6);
+            // One pass for the new point and the part of the error sum that does not need k7: the sum is still
+            // formed left to right (E1 k1 + ... + E6 k6, then + E7 k7), so results are unchanged.
             for (int i = 0; i < n; i++) {
-                yNew[i] = y[i] + h * (A71 * k1[i] + A73 * k3[i] + A74 * k4[i] + A75 * k5[i] + A76 * k6[i]);
+                double k1i = k1[i], k3i = k3[i], k4i = k4[i], k5i = k5[i], k6i = k6[i];
+                yNew[i] = y[i] + h * (A71 * k1i + A73 * k3i + A74 * k4i + A75 * k5i + A76 * k6i);
+                errPart[i] = E1 * k1i + E3 * k3i + E4 * k4i + E5 * k5i + E6 * k6i;
             }
             field.rates(tNew, yNew, p, k7);
             c.evaluations += 6;
 
             double err = 0;
-            for (int i = 0; i < n; i++) {
-                double sk = atol[i] + rtol[i] * Math.max(Math.abs(y[i]), Math.abs(yNew[i]));
-                double e = h * (E1 * k1[i] + E3 * k3[i] + E4 * k4[i] + E5 * k5[i] + E6 * k6[i] + E7 * k7[i]) / sk;
-                err += e * e;
+            double finite = 0; // x - x is 0 for finite x and NaN otherwise, so this is NaN if some yNew[i] is not
+            double largest = 0; // |yNew|_inf, the blow-up test after acceptance
+            if (uniformTolerances) {
+                double a = atol[0], r = rtol[0];
+                for (int i = 0; i < n; i++) {
+                    double yi = yNew[i];
+                    double sk = a + r * Math.max(Math.abs(y[i]), Math.abs(yi));
+                    double e = h * (errPart[i] + E7 * k7[i]) / sk;
+                    err += e * e;
+                    finite += yi - yi;
+                    largest = Math.max(largest, Math.abs(yi));
+                }
+            } else {
+                for (int i = 0; i < n; i++) {
+                    double yi = yNew[i];
+                    double sk = atol[i] + rtol[i] * Math.max(Math.abs(y[i]), Math.abs(yi));
+                    double e = h * (errPart[i] + E7 * k7[i]) / sk;
+                    err += e * e;
+                    finite += yi - yi;
+                    largest = Math.max(largest, Math.abs(yi));
+                }
             }
             err = Math.sqrt(err / n);
-            if (!Double.isFinite(err) || !Vectors.allFinite(yNew)) {
+            if (!Double.isFinite(err) || finite != 0) {
                 // Overflow or NaN in a trial step: often the step was too bold, so shrink hard and retry.
                 c.rejected++;
                 rejectedLast = true;
@@ -227,7 +251,7 @@ public final class DormandPrince54 implements Integrator {
                         return c.outcome(IntegrationOutcome.Ending.STOPPED, t, y, h, s);
                     }
                 }
-                if (Vectors.normInf(y) > s.blowUpBound()) {
+                if (largest > s.blowUpBound()) { // |y|_inf of the accepted point, measured in the error pass
                     return c.outcome(IntegrationOutcome.Ending.BLEW_UP, t, y, h, s);
                 }
                 if (last) {

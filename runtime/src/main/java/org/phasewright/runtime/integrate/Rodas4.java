@@ -1,9 +1,14 @@
 package org.phasewright.runtime.integrate;
 
-import org.phasewright.runtime.linalg.DenseLu;
-import org.phasewright.runtime.linalg.Vectors;
+import java.util.Arrays;
 
+import org.phasewright.runtime.compile.SparseJacobian;
 import org.phasewright.runtime.compile.VectorField;
+import org.phasewright.runtime.linalg.DenseLu;
+import org.phasewright.runtime.linalg.SparseLu;
+import org.phasewright.runtime.linalg.SparseMatrix;
+import org.phasewright.runtime.linalg.SparsePattern;
+import org.phasewright.runtime.linalg.Vectors;
 
 /**
  * Stiffly accurate Rosenbrock method RODAS4 of Hairer and Wanner: six stages, order 4 with an embedded order-3
@@ -14,6 +19,9 @@ import org.phasewright.runtime.compile.VectorField;
  * <p>
  * Each step uses the exact Jacobian of the compiled model, one LU factorisation of I/(hγ) − J and six linear solves.
  * The time derivative of non-autonomous rates is taken by a forward difference. The step loop allocates nothing.
+ * <p>
+ * Large models ({@link VectorField#large()}) form I/(hγ) − J from the sparse Jacobian and factor it with a sparse
+ * LU, so memory grows with the nonzeros rather than with n².
  */
 public final class Rodas4 implements Integrator {
     private static final double GAMMA = 0.25;
@@ -51,6 +59,11 @@ public final class Rodas4 implements Integrator {
     private double[] y, yNew;
     private final double[] f0, ft, fs, yStage, k1, k2, k3, k4, k5, k6, jac, matrix, q1, q2, yOld;
     private final DenseLu lu;
+    /** Sparse path (null on the dense one): J, the iteration matrix W = I/(hγ) − J and where J's slots go in W. */
+    private final SparseJacobian sparse;
+    private final SparseMatrix sparseJac, sparseW;
+    private final int[] jacobianSlots, diagonalSlots;
+    private final SparseLu sparseLu;
     private final Dense dense = new Dense();
 
     /** @param autonomous true when the rates do not depend on time (saves the time-derivative evaluation) */
@@ -74,9 +87,76 @@ public final class Rodas4 implements Integrator {
         k6 = new double[n];
         q1 = new double[n];
         q2 = new double[n];
-        jac = new double[n * n];
-        matrix = new double[n * n];
-        lu = new DenseLu(n);
+        if (field.large()) {
+            sparse = field.sparseJacobian();
+            if (sparse == null) {
+                throw new IllegalArgumentException("the stiff solver needs a sparse Jacobian for a model of " + n
+                        + " states");
+            }
+            sparseJac = sparse.newMatrix();
+            SparsePattern w = sparseJac.pattern().withDiagonal();
+            sparseW = new SparseMatrix(w);
+            jacobianSlots = w.slotsOf(sparseJac.pattern());
+            diagonalSlots = new int[n];
+            for (int i = 0; i < n; i++) {
+                diagonalSlots[i] = w.find(i, i);
+            }
+            sparseLu = new SparseLu(w);
+            jac = null;
+            matrix = null;
+            lu = null;
+        } else {
+            sparse = null;
+            sparseJac = null;
+            sparseW = null;
+            jacobianSlots = null;
+            diagonalSlots = null;
+            sparseLu = null;
+            jac = new double[n * n];
+            matrix = new double[n * n];
+            lu = new DenseLu(n);
+        }
+    }
+
+    /** Evaluates J at (t, y) into the dense or sparse buffer; false when it is not finite. */
+    private boolean evaluateJacobian(double t) {
+        if (sparse != null) {
+            sparse.values(t, y, p, sparseJac.values());
+            return sparseJac.allFinite();
+        }
+        field.jacobian(t, y, p, jac);
+        return Vectors.allFinite(jac);
+    }
+
+    /** Factors I·fac − J; false when singular. */
+    private boolean factor(double fac) {
+        if (sparse != null) {
+            double[] w = sparseW.values();
+            double[] j = sparseJac.values();
+            Arrays.fill(w, 0.0);
+            for (int s = 0; s < j.length; s++) {
+                w[jacobianSlots[s]] = -j[s];
+            }
+            for (int i = 0; i < n; i++) {
+                w[diagonalSlots[i]] += fac;
+            }
+            return sparseLu.factor(sparseW);
+        }
+        for (int i = 0; i < n * n; i++) {
+            matrix[i] = -jac[i];
+        }
+        for (int i = 0; i < n; i++) {
+            matrix[i * n + i] += fac;
+        }
+        return lu.factor(matrix);
+    }
+
+    private void solve(double[] b) {
+        if (sparse != null) {
+            sparseLu.solve(b);
+        } else {
+            lu.solve(b);
+        }
     }
 
     @Override
@@ -136,7 +216,7 @@ public final class Rodas4 implements Integrator {
             attempts++;
             if (needJacobian) { // once per accepted point: a rejected step retries with the same J and f
                 field.rates(t, y, p, f0);
-                field.jacobian(t, y, p, jac);
+                boolean finiteJacobian = evaluateJacobian(t);
                 evaluations++;
                 jacobians++;
                 if (!autonomous) {
@@ -147,19 +227,13 @@ public final class Rodas4 implements Integrator {
                         ft[i] = (ft[i] - f0[i]) / delta;
                     }
                 }
-                if (!Vectors.allFinite(f0) || !Vectors.allFinite(jac)) {
+                if (!Vectors.allFinite(f0) || !finiteJacobian) {
                     return outcome(IntegrationOutcome.Ending.NOT_FINITE, t, h, s, evaluations, accepted, rejected);
                 }
                 needJacobian = false;
             }
             double fac = 1 / (h * GAMMA);
-            for (int i = 0; i < n * n; i++) {
-                matrix[i] = -jac[i];
-            }
-            for (int i = 0; i < n; i++) {
-                matrix[i * n + i] += fac;
-            }
-            if (!lu.factor(matrix)) { // singular: retry with a smaller step
+            if (!factor(fac)) { // singular: retry with a smaller step
                 rejected++;
                 rejectedLast = true;
                 h *= 0.5;
@@ -170,7 +244,7 @@ public final class Rodas4 implements Integrator {
             for (int i = 0; i < n; i++) {
                 k1[i] = f0[i] + (autonomous ? 0 : hd1 * ft[i]);
             }
-            lu.solve(k1);
+            solve(k1);
             // Stage 2
             for (int i = 0; i < n; i++) {
                 yStage[i] = y[i] + A21 * k1[i];
@@ -179,7 +253,7 @@ public final class Rodas4 implements Integrator {
             for (int i = 0; i < n; i++) {
                 k2[i] = fs[i] + C21 * k1[i] / h + (autonomous ? 0 : hd2 * ft[i]);
             }
-            lu.solve(k2);
+            solve(k2);
             // Stage 3
             for (int i = 0; i < n; i++) {
                 yStage[i] = y[i] + A31 * k1[i] + A32 * k2[i];
@@ -188,7 +262,7 @@ public final class Rodas4 implements Integrator {
             for (int i = 0; i < n; i++) {
                 k3[i] = fs[i] + (C31 * k1[i] + C32 * k2[i]) / h + (autonomous ? 0 : hd3 * ft[i]);
             }
-            lu.solve(k3);
+            solve(k3);
             // Stage 4
             for (int i = 0; i < n; i++) {
                 yStage[i] = y[i] + A41 * k1[i] + A42 * k2[i] + A43 * k3[i];
@@ -197,7 +271,7 @@ public final class Rodas4 implements Integrator {
             for (int i = 0; i < n; i++) {
                 k4[i] = fs[i] + (C41 * k1[i] + C42 * k2[i] + C43 * k3[i]) / h + (autonomous ? 0 : hd4 * ft[i]);
             }
-            lu.solve(k4);
+            solve(k4);
             // Stage 5 at t + h
             for (int i = 0; i < n; i++) {
                 yStage[i] = y[i] + A51 * k1[i] + A52 * k2[i] + A53 * k3[i] + A54 * k4[i];
@@ -207,7 +281,7 @@ public final class Rodas4 implements Integrator {
             for (int i = 0; i < n; i++) {
                 k5[i] = fs[i] + (C51 * k1[i] + C52 * k2[i] + C53 * k3[i] + C54 * k4[i]) / h;
             }
-            lu.solve(k5);
+            solve(k5);
             // Stage 6 (embedded): its correction k6 is the error estimate
             for (int i = 0; i < n; i++) {
                 yStage[i] += k5[i];
@@ -216,7 +290,7 @@ public final class Rodas4 implements Integrator {
             for (int i = 0; i < n; i++) {
                 k6[i] = fs[i] + (C61 * k1[i] + C62 * k2[i] + C63 * k3[i] + C64 * k4[i] + C65 * k5[i]) / h;
             }
-            lu.solve(k6);
+            solve(k6);
             evaluations += 5;
             double err = 0;
             for (int i = 0; i < n; i++) {

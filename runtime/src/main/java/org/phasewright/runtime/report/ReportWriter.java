@@ -6,8 +6,10 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.phasewright.runtime.study.AnalysisResult;
+import org.phasewright.runtime.study.BasinsResult;
 import org.phasewright.runtime.study.ContinuationResult;
 import org.phasewright.runtime.study.EquilibriumResult;
+import org.phasewright.runtime.study.LyapunovMapResult;
 import org.phasewright.runtime.study.LyapunovResult;
 import org.phasewright.runtime.study.SectionResult;
 import org.phasewright.runtime.study.SimulationResult;
@@ -16,10 +18,11 @@ import org.phasewright.runtime.study.SweepResult;
 
 /**
  * Writes every file of a study result into a folder: summary.txt, trajectory.csv for each simulation that produced
- * samples, equilibria.csv and equilibria.json for each search, section.csv (the crossings, same columns as a
+ * samples (and final-state.csv, one row per state, when the model has more states than the summary shows), equilibria.csv and equilibria.json for each search, section.csv (the crossings, same columns as a
  * trajectory) for each section, lyapunov.csv (running estimates) for each Lyapunov request,
  * branches.csv and branches.json for each continuation (and cycles.csv when it followed periodic orbits from Hopf
- * points), sweep.csv (local maxima) for each orbit diagram. The second simulation or search of a study gets files
+ * points), sweep.csv (local maxima) for each orbit diagram, lyapunov-map.csv for each Lyapunov map and basins.csv
+ * for each basins request. The second simulation or search of a study gets files
  * named trajectory-2.csv, equilibria-2.csv, and so on.
  */
 public final class ReportWriter {
@@ -29,7 +32,7 @@ public final class ReportWriter {
     /** @return the files written, in the order of the analyses, summary last */
     public static List<Path> writeAll(StudyResult study, Path folder) throws IOException {
         List<Path> written = new ArrayList<>();
-        int simulation = 0, search = 0, section = 0, lyapunov = 0, continuation = 0, sweep = 0;
+        int simulation = 0, search = 0, section = 0, lyapunov = 0, continuation = 0, sweep = 0, map = 0, basins = 0;
         for (AnalysisResult r : study.results()) {
             switch (r) {
                 case SimulationResult s -> {
@@ -37,6 +40,12 @@ public final class ReportWriter {
                     if (s.trajectory() != null) {
                         Path file = folder.resolve(name("trajectory", simulation, "csv"));
                         AtomicFiles.write(file, out -> TrajectoryCsv.write(s.trajectory(), out));
+                        written.add(file);
+                    }
+                    if (s.integration() != null && s.integration().state().length > TextSummary.SHOWN_STATES) {
+                        Path file = folder.resolve(name("final-state", simulation, "csv"));
+                        AtomicFiles.write(file, out -> FinalStateCsv.write(study.stateNames(), s.integration(),
+                                out));
                         written.add(file);
                     }
                 }
@@ -87,6 +96,22 @@ public final class ReportWriter {
                     if (w.sweep() != null) {
                         Path csv = folder.resolve(name("sweep", sweep, "csv"));
                         AtomicFiles.write(csv, SweepCsv.render(study.stateNames(), w.sweep()));
+                        written.add(csv);
+                    }
+                }
+                case LyapunovMapResult m -> {
+                    map++;
+                    if (m.first() != null && !m.points().isEmpty()) {
+                        Path csv = folder.resolve(name("lyapunov-map", map, "csv"));
+                        AtomicFiles.write(csv, LyapunovMapCsv.render(m));
+                        written.add(csv);
+                    }
+                }
+                case BasinsResult b -> {
+                    basins++;
+                    if (b.first() != null && !b.points().isEmpty()) {
+                        Path csv = folder.resolve(name("basins", basins, "csv"));
+                        AtomicFiles.write(csv, BasinsCsv.render(b));
                         written.add(csv);
                     }
                 }

@@ -13,12 +13,17 @@ import org.phasewright.runtime.study.SectionResult;
 import org.phasewright.runtime.study.SimulationResult;
 import org.phasewright.runtime.study.StudyResult;
 import org.phasewright.runtime.study.SweepResult;
+import org.phasewright.runtime.study.LyapunovMapResult;
+import org.phasewright.runtime.study.BasinsResult;
 
 /** A plain-text account of a study for a terminal: outcomes, counts, final states and a table of equilibria. */
 public final class TextSummary {
     /** Shown with every report: models of heaters, reactors and the like can drive real decisions. */
     public static final String CAUTION = "These results describe the model, not the equipment it stands for; for any"
             + " design or safety decision defer to the applicable codes and qualified review.";
+
+    /** Final states of larger models are shown up to this many states. */
+    static final int SHOWN_STATES = 16;
 
     private TextSummary() {
     }
@@ -45,6 +50,12 @@ public final class TextSummary {
                         : " in " + w.sweep().parameterName() + " from " + Numbers.compact(w.sweep().from()) + " to "
                                 + Numbers.compact(w.sweep().to())).append(": ").append(w.outcome()).append(" - ")
                         .append(w.message()).append('\n');
+                case LyapunovMapResult m -> out.append("Lyapunov map").append(m.first() == null ? ""
+                        : " over " + m.first().name() + " and " + m.second().name()).append(": ").append(m.outcome())
+                        .append(" - ").append(m.message()).append('\n');
+                case BasinsResult b -> out.append("Basins").append(b.first() == null ? ""
+                        : " over " + b.first().name() + " and " + b.second().name()).append(": ").append(b.outcome())
+                        .append(" - ").append(b.message()).append('\n');
             }
         }
         return out.toString();
@@ -61,10 +72,17 @@ public final class TextSummary {
             out.append("  steps: ").append(o.acceptedSteps()).append(" accepted, ").append(o.rejectedSteps())
                     .append(" rejected; ").append(o.rhsEvaluations()).append(" rate evaluations\n");
         }
+        double[] state = o.state();
+        boolean many = state.length > SHOWN_STATES;
         out.append("  state at ").append(study.timeName()).append(" = ").append(Numbers.compact(o.time()))
-                .append(": ").append(assignments(study.stateNames(), o.state())).append('\n');
+                .append(": ").append(assignments(study.stateNames(), many
+                        ? java.util.Arrays.copyOf(state, SHOWN_STATES) : state))
+                .append(many ? ", ... (" + state.length + " states; every one in final-state.csv)" : "")
+                .append('\n');
         if (s.trajectory() != null) {
-            out.append("  output: ").append(s.trajectory().size()).append(" samples\n");
+            out.append("  output: ").append(s.trajectory().size()).append(" samples")
+                    .append(s.trajectory().kept() == null ? "" : " keeping the " + s.trajectory().kept())
+                    .append('\n');
         }
     }
 
@@ -76,13 +94,22 @@ public final class TextSummary {
         }
         List<List<String>> rows = new ArrayList<>();
         List<String> header = new ArrayList<>(List.of("name"));
-        header.addAll(study.stateNames());
+        int shown = Math.min(study.stateNames().size(), SHOWN_STATES); // large models: the first few coordinates
+        boolean cut = shown < study.stateNames().size();
+        header.addAll(study.stateNames().subList(0, shown));
+        if (cut) {
+            header.add("...");
+        }
         header.addAll(List.of("eigenvalues", "type"));
         rows.add(header);
         for (Equilibrium q : e.equilibria()) {
             List<String> row = new ArrayList<>(List.of(q.name()));
-            for (double x : q.coordinates()) {
-                row.add(Numbers.compact(x));
+            double[] coordinates = q.coordinates();
+            for (int i = 0; i < shown; i++) {
+                row.add(Numbers.compact(coordinates[i]));
+            }
+            if (cut) {
+                row.add("...");
             }
             row.add(eigenvalues(q.eigenvaluesReal(), q.eigenvaluesImag()));
             row.add(q.type());

@@ -2,7 +2,7 @@ package org.phasewright.runtime.study;
 
 /** The result of one analysis of a study: never an exception, always a named outcome and a message for people. */
 public sealed interface AnalysisResult permits SimulationResult, EquilibriumResult, SectionResult, LyapunovResult,
-        ContinuationResult, SweepResult {
+        ContinuationResult, SweepResult, LyapunovMapResult, BasinsResult {
     Status status();
 
     /** Name of the specific ending, e.g. COMPLETED, BLEW_UP, WORK_LIMIT, INVALID_INPUT. */

@@ -5,6 +5,8 @@ import java.util.List;
 import java.util.Optional;
 
 import org.phasewright.runtime.compile.CompiledModel;
+import org.phasewright.runtime.compile.ModelCompiler;
+import org.phasewright.runtime.compile.SparseJacobian;
 import org.phasewright.runtime.continuation.BranchFollower;
 import org.phasewright.runtime.continuation.ContinuationOutcome;
 import org.phasewright.runtime.continuation.ContinuationSettings;
@@ -41,6 +43,13 @@ final class ContinuationRunner {
             return new ContinuationResult(null, Status.FAILED, "NOT_AUTONOMOUS",
                     "equilibria are only defined for autonomous models, but the rates depend on time "
                             + model.timeName());
+        }
+        if (model.field().large()) {
+            // The branch follower works with dense (n+1)×(n+1) systems and eigenvalues at every step.
+            return new ContinuationResult(null, Status.FAILED, "MODEL_TOO_LARGE", "continuation works with dense "
+                    + "Jacobians, which models have up to " + SparseJacobian.DENSE_LIMIT + " states (indexed models "
+                    + "up to " + ModelCompiler.INDEXED_DENSE_JACOBIAN_LIMIT + "); this model has "
+                    + model.dimension());
         }
         double[] base = model.parameters();
         double from, to;

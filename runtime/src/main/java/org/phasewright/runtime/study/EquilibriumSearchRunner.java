@@ -5,9 +5,11 @@ import java.util.List;
 import java.util.Optional;
 
 import org.phasewright.runtime.compile.CompiledModel;
+import org.phasewright.runtime.compile.SparseJacobian;
 import org.phasewright.runtime.equilibria.Equilibrium;
 import org.phasewright.runtime.equilibria.EquilibriumFinder;
 import org.phasewright.runtime.equilibria.EquilibriumSearchOutcome;
+import org.phasewright.runtime.equilibria.EquilibriumSettings;
 import org.phasewright.runtime.equilibria.PolynomialRoots;
 import org.phasewright.runtime.equilibria.StartPoints;
 import org.phasewright.runtime.integrate.DormandPrince54;
@@ -19,6 +21,10 @@ import org.phasewright.runtime.symmetry.SymmetryReport;
 final class EquilibriumSearchRunner {
     /** Steps of the exploratory trajectory when the study has none: enough to see transients, cheap for any model. */
     static final int SHORT_RUN_STEPS = 2000;
+    /** Large models: trajectory points kept as Newton starts, steps of the short run, Newton iterations in all. */
+    static final int LARGE_TRAJECTORY_STARTS = 4;
+    static final int LARGE_SHORT_RUN_STEPS = 200;
+    static final long LARGE_ITERATIONS = 100;
 
     private EquilibriumSearchRunner() {
     }
@@ -30,6 +36,9 @@ final class EquilibriumSearchRunner {
                             + model.timeName());
         }
         double[] p = model.parameters();
+        if (model.dimension() > SparseJacobian.DENSE_LIMIT) {
+            return large(model, p, trajectory, settings, budget);
+        }
         List<double[]> points = trajectory != null ? rows(trajectory) : shortRun(model, p, settings, budget);
         StartPoints starts = StartPoints.build(p, model.initialState(), points, settings.equilibria());
         // Polynomial rate laws: every isolated root by homotopy; its real roots are tried first.
@@ -45,6 +54,63 @@ final class EquilibriumSearchRunner {
         String message = search.message() + homotopy.map(h -> "; " + h.message()).orElse("");
         return new EquilibriumResult(search.equilibria(), search, status, search.ending().name(), message,
                 symmetry(model, search.equilibria()));
+    }
+
+    /**
+     * A model above {@link SparseJacobian#DENSE_LIMIT} states: sparse Newton from the initial state, the origin and
+     * a few late points of a short run; no polynomial homotopy (its start system has a root count exponential in
+     * the dimension) and no eigenvalues, both said in the message.
+     */
+    private static EquilibriumResult large(CompiledModel model, double[] p, Trajectory trajectory, RunSettings settings,
+            Budget budget) {
+        int n = model.dimension();
+        if (model.field().sparseJacobian() == null) {
+            return new EquilibriumResult(List.of(), null, Status.FAILED, "MODEL_TOO_LARGE", "a model of " + n
+                    + " states needs a sparse Jacobian for Newton's method, but its Jacobian has too many nonzeros");
+        }
+        List<double[]> points = trajectory != null ? lastRows(trajectory, LARGE_TRAJECTORY_STARTS)
+                : lastPoints(model, p, settings, budget);
+        EquilibriumSettings defaults = settings.equilibria();
+        EquilibriumSettings few = new EquilibriumSettings(0, LARGE_TRAJECTORY_STARTS,
+                defaults.maxNewtonIterations(), Math.min(defaults.maxTotalIterations(), LARGE_ITERATIONS),
+                defaults.residualTolerance(), defaults.stepTolerance(), defaults.duplicateTolerance(),
+                defaults.eigenTolerance());
+        StartPoints starts = StartPoints.build(p, model.initialState(), points, few);
+        EquilibriumSearchOutcome search = new EquilibriumFinder(model.field(), p, few)
+                .find(starts, budget.deadlineNanos(), budget.cancelled());
+        Status status = search.ending() == EquilibriumSearchOutcome.Ending.COMPLETED ? Status.COMPLETED
+                : Status.INCOMPLETE;
+        String message = search.message() + "; a model of " + n + " states (more than "
+                + SparseJacobian.DENSE_LIMIT + ") is searched by sparse Newton from " + starts.points().size()
+                + " starts without polynomial homotopy, and its equilibria are not classified";
+        return new EquilibriumResult(search.equilibria(), search, status, search.ending().name(), message,
+                symmetry(model, search.equilibria()));
+    }
+
+    /** The last {@code count} rows of a trajectory. */
+    private static List<double[]> lastRows(Trajectory trajectory, int count) {
+        List<double[]> out = new ArrayList<>();
+        for (int k = Math.max(0, trajectory.size() - count); k < trajectory.size(); k++) {
+            out.add(trajectory.stateRow(k));
+        }
+        return out;
+    }
+
+    /** The last few accepted points of a short run, keeping only those (each costs n doubles). */
+    private static List<double[]> lastPoints(CompiledModel model, double[] p, RunSettings settings, Budget budget) {
+        java.util.ArrayDeque<double[]> last = new java.util.ArrayDeque<>();
+        IntegratorSettings s = IntegratorSettings.DEFAULT.withMaxSteps(LARGE_SHORT_RUN_STEPS)
+                .withTolerances(1e-6, 1e-8)
+                .withBlowUpBound(settings.blowUpBound())
+                .withDeadline(budget.deadlineNanos())
+                .withCancellation(budget.cancelled());
+        new DormandPrince54(model.field(), p).integrate(0.0, model.initialState(), 1e9, s, step -> {
+            if (last.size() == LARGE_TRAJECTORY_STARTS) {
+                last.removeFirst();
+            }
+            last.addLast(step.endState().clone());
+        });
+        return new ArrayList<>(last);
     }
 
     /** Orbits, isotropy and invariant subspaces under the declared symmetries (empty when there are none). */

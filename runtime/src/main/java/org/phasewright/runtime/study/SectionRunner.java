@@ -44,26 +44,40 @@ final class SectionRunner {
                 .withBlowUpBound(settings.blowUpBound())
                 .withDeadline(budget.deadlineNanos())
                 .withCancellation(budget.cancelled());
+        boolean reduced = ReducedSampler.needed(model);
+        int limit = reduced ? largeModelCrossings(model.dimension()) : RunSettings.MAX_OUTPUT_SAMPLES;
         CrossingLocator locator = new CrossingLocator(g, Surfaces.direction(section.direction()), model.dimension(),
-                RunSettings.MAX_OUTPUT_SAMPLES);
+                limit);
         IntegrationOutcome outcome = IntegratorChoice.create(section.method(), model, p)
                 .integrate(0.0, model.initialState(), endTime, integratorSettings, ProgressObserver.wrap(locator,
                         settings, ProgressObserver.task("section", model.timeName(), endTime), 0.0, endTime));
 
         double[] times = locator.times();
         double[][] states = locator.states();
-        DerivedValues dv = model.derivedValues();
-        double[][] derived = new double[times.length][dv.derivedCount()];
-        for (int k = 0; k < times.length; k++) {
-            dv.derived(times[k], states[k], p, derived[k]);
+        Trajectory points;
+        if (reduced) { // the same columns as a reduced simulation: a few states, derived values and summaries
+            ReducedSampler rows = new ReducedSampler(model, p, times);
+            for (int k = 0; k < times.length; k++) {
+                rows.next(states[k]);
+            }
+            points = rows.trajectory(true, Double.NaN, null);
+        } else {
+            DerivedValues dv = model.derivedValues();
+            double[][] derived = new double[times.length][dv.derivedCount()];
+            for (int k = 0; k < times.length; k++) {
+                dv.derived(times[k], states[k], p, derived[k]);
+            }
+            points = new Trajectory(model.timeName(), model.stateNames(), model.derivedNames(), times, states,
+                    derived);
         }
-        Trajectory points = new Trajectory(model.timeName(), model.stateNames(), model.derivedNames(), times, states,
-                derived);
         String what = String.format(Locale.ROOT, "%d %s crossing%s", times.length,
                 section.direction().name().toLowerCase(Locale.ROOT).replace("both", "rising and falling"),
                 times.length == 1 ? "" : "s");
         if (locator.truncated()) {
-            what += " (more were found than the " + RunSettings.MAX_OUTPUT_SAMPLES + " kept)";
+            what += " (more were found than the " + limit + " kept)";
+        }
+        if (points.kept() != null) {
+            what += "; each keeps the " + points.kept().replace("; the final state in full", "");
         }
         String message = outcome.completed() ? what + " up to " + model.timeName() + " = "
                 + plain(endTime)
@@ -73,6 +87,14 @@ final class SectionRunner {
         }
         return new SectionResult(points, outcome, endTime, IntegratorChoice.status(outcome), outcome.ending().name(),
                 message);
+    }
+
+    /**
+     * Crossings kept for a model with {@code n} states: the locator holds each in full, so at most about 400 MB of
+     * them (50 for 10^6 states), and never fewer than 10.
+     */
+    static int largeModelCrossings(int n) {
+        return (int) Math.max(10, Math.min(RunSettings.MAX_OUTPUT_SAMPLES, 400_000_000L / (8L * n)));
     }
 
     /** "1000" rather than "1000.0"; other values as Java prints them. */

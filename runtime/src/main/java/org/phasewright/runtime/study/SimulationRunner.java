@@ -10,13 +10,18 @@ import org.phasewright.runtime.integrate.EventStop;
 import org.phasewright.runtime.integrate.IntegrationOutcome;
 import org.phasewright.runtime.integrate.IntegratorSettings;
 import org.phasewright.runtime.integrate.OutputSampler;
+import org.phasewright.runtime.integrate.StepObserver;
 import org.phasewright.runtime.integrate.SwitchingFunction;
 import org.phasewright.runtime.model.Expr;
 import org.phasewright.runtime.model.Simulation;
 import org.phasewright.runtime.symbolic.InitialValues;
 import org.phasewright.runtime.symbolic.ModelEvaluationException;
 
-/** Runs one {@link Simulation}: evaluates its settings, integrates, and samples a trajectory by dense output. */
+/**
+ * Runs one {@link Simulation}: evaluates its settings, integrates, and samples a trajectory by dense output. Models
+ * with more than {@link ReducedSampler#LIMIT} states keep a few columns and summaries per sample
+ * ({@link ReducedSampler}).
+ */
 final class SimulationRunner {
     static final double DEFAULT_RTOL = 1e-8;
     /** atol = rtol / 100, which gives the default pair rtol 1e-8, atol 1e-10. */
@@ -57,12 +62,15 @@ final class SimulationRunner {
                 .withBlowUpBound(settings.blowUpBound())
                 .withDeadline(budget.deadlineNanos())
                 .withCancellation(budget.cancelled());
-        OutputSampler sampler = new OutputSampler(OutputSampler.evenlySpaced(0.0, endTime, settings.samples()),
-                model.dimension());
+        double[] outputTimes = OutputSampler.evenlySpaced(0.0, endTime, settings.samples());
+        boolean reduced = ReducedSampler.needed(model);
+        OutputSampler sampler = reduced ? null : new OutputSampler(outputTimes, model.dimension());
+        ReducedSampler reducedSampler = reduced ? new ReducedSampler(model, p, outputTimes) : null;
+        StepObserver output = reduced ? reducedSampler : sampler;
         EventStop stop = stopSurface == null ? null : new EventStop(stopSurface,
-                Surfaces.direction(simulation.stop().direction()), model.dimension(), sampler);
+                Surfaces.direction(simulation.stop().direction()), model.dimension(), output);
         IntegrationOutcome outcome = IntegratorChoice.create(simulation.method(), model, p)
-                .integrate(0.0, start, endTime, integratorSettings, ProgressObserver.wrap(stop == null ? sampler : stop,
+                .integrate(0.0, start, endTime, integratorSettings, ProgressObserver.wrap(stop == null ? output : stop,
                         settings, ProgressObserver.task("simulate", model.timeName(), endTime), 0.0, endTime));
         if (outcome.ending() == IntegrationOutcome.Ending.STOPPED) { // report the event, not the step's end
             outcome = new IntegrationOutcome(outcome.ending(), stop.time(), stop.state(), outcome.rhsEvaluations(),
@@ -70,12 +78,17 @@ final class SimulationRunner {
                     outcome.stiffnessDetectedAt());
         }
 
-        Trajectory trajectory = trajectory(model, p, sampler, outcome);
+        Trajectory trajectory = reduced
+                ? reducedSampler.trajectory(outcome.completed(), outcome.time(), outcome.state())
+                : trajectory(model, p, sampler, outcome);
         String message = outcome.message(model.timeName());
         if (outcome.ending() == IntegrationOutcome.Ending.STOPPED) {
             message = "stopped by the condition at " + model.timeName() + " = "
                     + SectionRunner.plain(stop.time()) + " after " + outcome.acceptedSteps() + " steps ("
                     + outcome.rejectedSteps() + " rejected, " + outcome.rhsEvaluations() + " evaluations)";
+        }
+        if (trajectory.kept() != null) {
+            message += "; output keeps the " + trajectory.kept();
         }
         return new SimulationResult(trajectory, outcome, endTime, rtol, IntegratorChoice.status(outcome),
                 outcome.ending().name(), message);

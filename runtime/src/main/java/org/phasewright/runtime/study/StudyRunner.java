@@ -40,15 +40,15 @@ public final class StudyRunner {
                         case LyapunovExponents l -> LyapunovRunner.run(model, l, settings, budget);
                         case EquilibriumContinuation c -> ContinuationRunner.run(model, c, settings, budget);
                         case ParameterSweep w -> SweepRunner.run(model, w, settings, budget);
-                        // TRANSITIONAL (ensemble work in progress): replaced by the ensemble runners
-                        case LyapunovMap m -> failed(analysis, "Lyapunov maps are not available yet");
-                        case Basins b -> failed(analysis, "basins are not available yet");
+                        case LyapunovMap m -> LyapunovMapRunner.run(model, m, settings, budget);
+                        case Basins b -> BasinsRunner.run(model, b, settings, budget);
                     };
                 } catch (RuntimeException e) { // a bug must not surface as a stack trace in a user's terminal
                     result = failed(analysis, "internal error: " + e);
                 }
             }
-            if (result instanceof SimulationResult s && s.trajectory() != null && s.trajectory().size() > 0) {
+            if (result instanceof SimulationResult s && s.trajectory() != null && s.trajectory().size() > 0
+                    && s.trajectory().kept() == null) { // a reduced trajectory has too few columns to seed Newton
                 latest = s.trajectory();
             }
             results.add(result);
@@ -73,8 +73,10 @@ public final class StudyRunner {
             case LyapunovExponents l -> new LyapunovResult(null, Double.NaN, Status.INCOMPLETE, why, message);
             case EquilibriumContinuation c -> new ContinuationResult(null, Status.INCOMPLETE, why, message);
             case ParameterSweep w -> new SweepResult(null, Status.INCOMPLETE, why, message);
-            case LyapunovMap m -> new SweepResult(null, Status.INCOMPLETE, why, message); // TRANSITIONAL
-            case Basins b -> new SweepResult(null, Status.INCOMPLETE, why, message); // TRANSITIONAL
+            case LyapunovMap m -> new LyapunovMapResult(null, null, Double.NaN, null, null, Status.INCOMPLETE, why,
+                    message);
+            case Basins b -> new BasinsResult(null, null, Double.NaN, null, null, null, Status.INCOMPLETE, why,
+                    message);
         };
     }
 
@@ -89,8 +91,10 @@ public final class StudyRunner {
                     message);
             case EquilibriumContinuation c -> new ContinuationResult(null, Status.FAILED, "INTERNAL_ERROR", message);
             case ParameterSweep w -> new SweepResult(null, Status.FAILED, "INTERNAL_ERROR", message);
-            case LyapunovMap m -> new SweepResult(null, Status.FAILED, "INTERNAL_ERROR", message); // TRANSITIONAL
-            case Basins b -> new SweepResult(null, Status.FAILED, "INTERNAL_ERROR", message); // TRANSITIONAL
+            case LyapunovMap m -> new LyapunovMapResult(null, null, Double.NaN, null, null, Status.FAILED,
+                    "INTERNAL_ERROR", message);
+            case Basins b -> new BasinsResult(null, null, Double.NaN, null, null, null, Status.FAILED,
+                    "INTERNAL_ERROR", message);
         };
     }
 }

@@ -1,15 +1,23 @@
 package org.phasewright.runtime.study;
 
+import java.util.ArrayList;
+import java.util.List;
+
 import org.phasewright.runtime.compile.CompiledModel;
 import org.phasewright.runtime.continuation.ParameterVector;
-import org.phasewright.runtime.integrate.IntegratorSettings;
+import org.phasewright.runtime.ensemble.Axis;
+import org.phasewright.runtime.ensemble.EnsembleFailure;
+import org.phasewright.runtime.ensemble.EnsembleRun;
+import org.phasewright.runtime.ensemble.IntegrationRecipe;
+import org.phasewright.runtime.ensemble.OrbitColumn;
+import org.phasewright.runtime.ensemble.OrbitPoints;
 import org.phasewright.runtime.model.ParameterSweep;
 import org.phasewright.runtime.symbolic.InitialValues;
 import org.phasewright.runtime.symbolic.ModelEvaluationException;
-import org.phasewright.runtime.sweep.OrbitDiagram;
+import org.phasewright.runtime.sweep.SweepColumn;
 import org.phasewright.runtime.sweep.SweepOutcome;
 
-/** Runs one {@link ParameterSweep} (orbit diagram) on all cores. */
+/** Runs one {@link ParameterSweep} (orbit diagram) on the ensemble executor of the run settings. */
 final class SweepRunner {
     /** Keeps a typo such as `steps 1000000` from tying up a machine; the wall-time limit still applies. */
     static final int MAX_STEPS = 100_000;
@@ -36,22 +44,41 @@ final class SweepRunner {
         } catch (ModelEvaluationException e) {
             return new SweepResult(null, Status.FAILED, "INVALID_INPUT", e.getMessage());
         }
-        IntegratorSettings s = IntegratorSettings.DEFAULT
-                .withTolerances(SimulationRunner.DEFAULT_RTOL, SimulationRunner.DEFAULT_RTOL
-                        * SimulationRunner.ATOL_PER_RTOL)
-                .withMaxSteps(settings.maxSteps())
-                .withBlowUpBound(settings.blowUpBound())
-                .withDeadline(budget.deadlineNanos())
-                .withCancellation(budget.cancelled());
+        IntegrationRecipe integration = new IntegrationRecipe(SimulationRunner.DEFAULT_RTOL,
+                SimulationRunner.DEFAULT_RTOL * SimulationRunner.ATOL_PER_RTOL, settings.maxSteps(),
+                settings.blowUpBound());
         String task = "sweep " + parameters.name() + " from " + SectionRunner.plain(from) + " to "
                 + SectionRunner.plain(to);
-        SweepOutcome outcome = OrbitDiagram.run(model, parameters, from, to, request.steps(), endTime, s,
-                budget.cancelled(), settings.progress() == ProgressListener.NONE ? null
-                        : fraction -> settings.progress().progress(task, fraction));
+        OrbitPoints points = OrbitPoints.of(model, new Axis(parameters.name(), parameters.index(), from, to,
+                request.steps()), endTime, integration);
+        EnsembleRun<OrbitColumn> run;
+        try {
+            run = settings.ensembles().run(points, model, Ensembles.control(settings, budget, task));
+        } catch (EnsembleFailure e) {
+            return new SweepResult(null, Status.FAILED, Ensembles.EXECUTOR_FAILED, e.getMessage());
+        }
+        List<SweepColumn> columns = new ArrayList<>();
+        boolean failed = false;
+        for (OrbitColumn c : run.rows()) {
+            if (c != null) {
+                columns.add(c.column());
+                failed |= !c.ending().equals("COMPLETED");
+            }
+        }
+        SweepOutcome.Ending ending = run.cancelled() || budget.cancelled().getAsBoolean()
+                ? SweepOutcome.Ending.CANCELLED
+                : columns.size() < request.steps() || budget.expired() ? SweepOutcome.Ending.TIME_LIMIT
+                        : failed ? SweepOutcome.Ending.SOME_FAILED : SweepOutcome.Ending.COMPLETED;
+        SweepOutcome outcome = new SweepOutcome(parameters.name(), from, to, endTime, columns, request.steps(),
+                run.workers(), ending);
         Status status = switch (outcome.ending()) {
             case COMPLETED -> Status.COMPLETED;
             case SOME_FAILED, TIME_LIMIT, CANCELLED -> Status.INCOMPLETE;
         };
-        return new SweepResult(outcome, status, outcome.ending().name(), outcome.message());
+        String message = outcome.message();
+        if (!message.contains(run.executor())) { // e.g. Spark: the threads alone would not say where it ran
+            message += " (" + run.executor() + ")";
+        }
+        return new SweepResult(outcome, status, outcome.ending().name(), message);
     }
 }

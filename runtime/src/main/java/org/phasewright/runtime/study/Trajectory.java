@@ -13,9 +13,19 @@ public final class Trajectory {
     private final double[] times;
     private final double[][] states;
     private final double[][] derived;
+    private final String kept;
 
     public Trajectory(String timeName, List<String> stateNames, List<String> derivedNames, double[] times,
             double[][] states, double[][] derived) {
+        this(timeName, stateNames, derivedNames, times, states, derived, null);
+    }
+
+    /**
+     * @param kept for models too large to keep every column: which columns were kept (the state columns are then
+     *             the first few states, and summary columns follow the derived ones); null when all were kept
+     */
+    public Trajectory(String timeName, List<String> stateNames, List<String> derivedNames, double[] times,
+            double[][] states, double[][] derived, String kept) {
         if (states.length != times.length || derived.length != times.length) {
             throw new IllegalArgumentException("rows of times, states and derived values differ");
         }
@@ -25,6 +35,12 @@ public final class Trajectory {
         this.times = times.clone();
         this.states = deepCopy(states);
         this.derived = deepCopy(derived);
+        this.kept = kept;
+    }
+
+    /** Which columns a reduced trajectory kept, or null when it has every state and derived quantity. */
+    public String kept() {
+        return kept;
     }
 
     public String timeName() {

@@ -77,8 +77,11 @@ public final class OrbitDiagram {
         return s.deadlineNanos() != Long.MAX_VALUE && System.nanoTime() - s.deadlineNanos() > 0;
     }
 
-    /** One parameter value; null when the budget ran out before it started. */
-    private static SweepColumn column(CompiledModel model, ParameterVector parameters, double value, double endTime,
+    /**
+     * One parameter value; null when the budget ran out before it started. Public so that ensemble executors
+     * compute each column with exactly this code.
+     */
+    public static SweepColumn column(CompiledModel model, ParameterVector parameters, double value, double endTime,
             IntegratorSettings settings, BooleanSupplier cancelled) {
         if (cancelled.getAsBoolean() || expired(settings)) {
             return null;

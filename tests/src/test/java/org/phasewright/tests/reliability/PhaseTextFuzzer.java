@@ -21,7 +21,8 @@ import java.util.stream.Stream;
 final class PhaseTextFuzzer {
     static final List<String> KEYWORDS = List.of("model", "time", "param", "state", "let", "rate", "symmetry", "study",
             "in", "range", "simulate", "to", "from", "initial", "tolerance", "equilibria", "reverses", "pi", "section",
-            "where", "rising", "falling", "lyapunov", "method", "explicit", "high_order", "stiff", "until", "follow");
+            "where", "rising", "falling", "lyapunov", "method", "explicit", "high_order", "stiff", "until", "follow",
+            "index", "cyclic", "bounded", "sum", "leading", "map", "over", "and", "basins");
     static final List<String> FUNCTIONS_1 = List.of("sin", "cos", "tan", "exp", "log", "sqrt", "abs", "tanh", "sinh",
             "cosh", "atan");
     static final List<String> UNITS = List.of("m", "s", "kg", "1", "m/s^2", "1/s", "rad", "rad/s", "mol/(m^3*s)",

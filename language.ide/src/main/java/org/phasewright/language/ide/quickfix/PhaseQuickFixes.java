@@ -95,7 +95,11 @@ public final class PhaseQuickFixes {
         if (anchor == null) {
             return;
         }
-        String line = "rate " + stateName + " = 0";
+        // a family's rate names its index, as its declaration does: `rate x[i] = 0`
+        String target = PhaseModels.states(model).stream()
+                .filter(st -> stateName.equals(st.getName()) && st.getIndex() != null && !st.getIndex().eIsProxy())
+                .map(st -> stateName + "[" + st.getIndex().getName() + "]").findFirst().orElse(stateName);
+        String line = "rate " + target + " = 0";
         fixes.add(new QuickFix("Add '" + line + "'",
                 List.of(TextChange.insert(endOfLine(text, NodeModelUtils.getNode(anchor).getEndOffset()), "\n" + line))));
     }

@@ -106,6 +106,23 @@ class DiagnosticsAndQuickFixTest extends LanguageServerTestBase {
     }
 
     @Test
+    void missingRateOfAFamilyNamesItsIndex() {
+        String cells = """
+                model cells
+                index i in 1 .. 4 cyclic
+                state x[i] = 1
+                state y = 0
+                rate y = -y
+                """;
+        String uri = openModel("cells.phase", cells);
+        List<CodeAction> actions = actionsFor(uri, diagnostic(uri, IssueCodes.MISSING_RATE));
+        Assertions.assertEquals(List.of("Add 'rate x[i] = 0'"), actions.stream().map(CodeAction::getTitle).toList());
+        String fixed = apply(cells, actions.get(0).getEdit().getChanges().get(uri));
+        assertTrue(fixed.contains("rate y = -y\nrate x[i] = 0\n"), fixed);
+        assertTrue(!hasCode(fixed, IssueCodes.MISSING_RATE), fixed);
+    }
+
+    @Test
     void unusedParamIsRemovedWithItsLine() {
         String uri = openModel("pond.phase", POND);
         Diagnostic unused = diagnosticsOf(uri).stream()

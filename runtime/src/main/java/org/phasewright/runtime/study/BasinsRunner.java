@@ -1,0 +1,79 @@
+package org.phasewright.runtime.study;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.phasewright.runtime.compile.CompiledModel;
+import org.phasewright.runtime.ensemble.Axis;
+import org.phasewright.runtime.ensemble.BasinPoint;
+import org.phasewright.runtime.ensemble.BasinPoints;
+import org.phasewright.runtime.ensemble.EnsembleFailure;
+import org.phasewright.runtime.ensemble.EnsembleRun;
+import org.phasewright.runtime.ensemble.IntegrationRecipe;
+import org.phasewright.runtime.equilibria.Equilibrium;
+import org.phasewright.runtime.model.Basins;
+import org.phasewright.runtime.symbolic.ModelEvaluationException;
+
+/**
+ * Runs one {@link Basins} request: the equilibria are found once, as an equilibrium search would, then every start
+ * of the grid runs on the ensemble executor and is labelled by the equilibrium it settles on.
+ */
+final class BasinsRunner {
+    private BasinsRunner() {
+    }
+
+    static BasinsResult run(CompiledModel model, Basins request, RunSettings settings, Budget budget) {
+        double[] p = model.parameters();
+        Axis first, second;
+        double endTime, rtol;
+        try {
+            first = Ensembles.axis(request.first(), p);
+            second = Ensembles.axis(request.second(), p);
+            Ensembles.checkGrid(first, second);
+            endTime = Ensembles.positive(request.endTime(), p, "end time");
+            rtol = Ensembles.tolerance(request.tolerance(), p, SimulationRunner.DEFAULT_RTOL);
+        } catch (ModelEvaluationException e) {
+            return new BasinsResult(null, null, Double.NaN, null, null, null, Status.FAILED, "INVALID_INPUT",
+                    e.getMessage());
+        }
+        EquilibriumResult search = EquilibriumSearchRunner.run(model, null, settings, budget);
+        if (search.status() == Status.FAILED) {
+            return new BasinsResult(first, second, endTime, null, null, null, Status.FAILED, search.outcome(),
+                    "no equilibria to label the basins by: " + search.message());
+        }
+        List<Equilibrium> equilibria = search.equilibria();
+        double[][] coordinates = equilibria.stream().map(Equilibrium::coordinates).toArray(double[][]::new);
+        BasinPoints task = BasinPoints.of(model, first, second, endTime, new IntegrationRecipe(rtol,
+                rtol * SimulationRunner.ATOL_PER_RTOL, settings.maxSteps(), settings.blowUpBound()), coordinates);
+        EnsembleRun<BasinPoint> run;
+        try {
+            run = settings.ensembles().run(task, model, Ensembles.control(settings, budget, "basins " + first.name()
+                    + " x " + second.name()));
+        } catch (EnsembleFailure e) {
+            return new BasinsResult(first, second, endTime, equilibria, null, null, Status.FAILED,
+                    Ensembles.EXECUTOR_FAILED, e.getMessage());
+        }
+        List<String> endings = new ArrayList<>();
+        int[] counts = new int[equilibria.size() + 1]; // the last counts starts that reached none
+        for (BasinPoint point : run.rows()) {
+            if (point != null) {
+                endings.add(point.ending());
+                counts[point.label() == BasinPoints.NONE ? equilibria.size() : point.label()]++;
+            }
+        }
+        String ending = Ensembles.ending(endings, task.points(), run.cancelled(), budget);
+        StringBuilder message = new StringBuilder(endings.size() + " of " + task.points() + " starts on "
+                + run.executor() + ":");
+        for (int e = 0; e < equilibria.size(); e++) {
+            message.append(' ').append(equilibria.get(e).name()).append(' ').append(counts[e]).append(',');
+        }
+        message.append(" none ").append(counts[equilibria.size()]).append(switch (ending) {
+            case "SOME_FAILED" -> "; some integrations ended early";
+            case "TIME_LIMIT" -> "; stopped at the wall-time limit";
+            case "CANCELLED" -> "; cancelled";
+            default -> "";
+        });
+        return new BasinsResult(first, second, endTime, equilibria, run.rows(), run.executor(),
+                Ensembles.status(ending), ending, message.toString());
+    }
+}

@@ -1,0 +1,62 @@
+package org.phasewright.runtime.equilibria;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.phasewright.runtime.compile.CompiledModel;
+import org.phasewright.runtime.compile.ModelCompiler;
+import org.phasewright.runtime.linalg.LatticeModels;
+import org.phasewright.runtime.model.Constant;
+import org.phasewright.runtime.model.EquilibriumContinuation;
+import org.phasewright.runtime.model.EquilibriumSearch;
+import org.phasewright.runtime.model.LyapunovExponents;
+import org.phasewright.runtime.model.Study;
+import org.phasewright.runtime.model.Variable;
+import org.phasewright.runtime.model.VariableKind;
+import org.phasewright.runtime.study.ContinuationResult;
+import org.phasewright.runtime.study.EquilibriumResult;
+import org.phasewright.runtime.study.LyapunovResult;
+import org.phasewright.runtime.study.RunSettings;
+import org.phasewright.runtime.study.Status;
+import org.phasewright.runtime.study.StudyResult;
+import org.phasewright.runtime.study.StudyRunner;
+
+/** Studies of a ring of 2000 states: what runs sparse, and the named outcomes for what cannot run at that size. */
+class LargeModelStudiesTest {
+
+    @Test
+    void ringOfTwoThousandStatesGetsSparseAnswersOrNamedOutcomes() {
+        CompiledModel ring = ModelCompiler.compile(LatticeModels.lorenz96(2000, 8, true));
+        Variable forcing = new Variable(VariableKind.PARAMETER, 0, "F");
+        Study study = new Study("large", List.of(new EquilibriumSearch(),
+                new LyapunovExponents(new Constant(20), null, 0),
+                new LyapunovExponents(new Constant(20), null, 2),
+                new EquilibriumContinuation(forcing, new Constant(7), new Constant(9))));
+        StudyResult result = StudyRunner.run(ring, study, RunSettings.DEFAULT);
+
+        EquilibriumResult search = result.equilibriumSearches().get(0);
+        // x_i = F is an equilibrium of Lorenz-96 for every N (closed form)
+        assertTrue(search.equilibria().stream().anyMatch(e -> java.util.Arrays.stream(e.coordinates())
+                .allMatch(x -> Math.abs(x - 8) < 1e-9)), search.message());
+        assertTrue(search.message().contains("without polynomial homotopy"), search.message());
+        assertEquals("not classified: dimension 2000 > 200", search.equilibria().get(0).type());
+
+        List<LyapunovResult> spectra = result.lyapunovSpectra();
+        assertEquals("MODEL_TOO_LARGE", spectra.get(0).outcome());
+        assertEquals(Status.FAILED, spectra.get(0).status());
+        assertTrue(spectra.get(0).message().contains("leading"), spectra.get(0).message());
+        LyapunovResult leading = spectra.get(1);
+        assertEquals(Status.COMPLETED, leading.status(), leading.message());
+        assertEquals(2, leading.spectrum().exponents().length);
+        // Lorenz-96 has divergence -N everywhere (closed form: ∂f_i/∂x_i = -1)
+        assertEquals(-2000.0, leading.spectrum().meanDivergence(), 1e-6);
+        assertTrue(leading.message().startsWith("leading 2 of 2000 exponents"), leading.message());
+
+        ContinuationResult continuation = result.continuations().get(0);
+        assertEquals("MODEL_TOO_LARGE", continuation.outcome());
+        assertTrue(continuation.message().contains("200"), continuation.message());
+    }
+}

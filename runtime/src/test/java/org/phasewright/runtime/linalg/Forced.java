@@ -1,0 +1,56 @@
+package org.phasewright.runtime.linalg;
+
+import org.phasewright.runtime.compile.SparseJacobian;
+import org.phasewright.runtime.compile.SparseJacobians;
+import org.phasewright.runtime.compile.VectorField;
+import org.phasewright.runtime.model.DynamicalModel;
+
+/**
+ * A field that claims to be large (sparse path) or small (dense path) whatever its dimension, so tests can run the
+ * same problem both ways.
+ */
+public record Forced(VectorField field, SparseJacobian sparse, boolean large) implements VectorField {
+    public static Forced sparse(DynamicalModel model, VectorField field) {
+        return new Forced(field, SparseJacobians.of(model, field), true);
+    }
+
+    /**
+     * The dense path for a field of any size: its dense Jacobian is assembled from the sparse one (large compiled
+     * models have no dense Jacobian of their own), so both paths see the same values.
+     */
+    public static Forced dense(VectorField field) {
+        return new Forced(field, field.sparseJacobian(), false);
+    }
+
+    @Override
+    public int dimension() {
+        return field.dimension();
+    }
+
+    @Override
+    public void rates(double t, double[] u, double[] p, double[] dudt) {
+        field.rates(t, u, p, dudt);
+    }
+
+    @Override
+    public void jacobian(double t, double[] u, double[] p, double[] jac) {
+        if (sparse == null) {
+            field.jacobian(t, u, p, jac);
+            return;
+        }
+        SparseMatrix m = sparse.newMatrix();
+        sparse.values(t, u, p, m.values());
+        int n = dimension();
+        java.util.Arrays.fill(jac, 0, n * n, 0.0);
+        for (int i = 0; i < n; i++) {
+            for (int k = m.pattern().rowStart(i); k < m.pattern().rowEnd(i); k++) {
+                jac[i * n + m.pattern().column(k)] = m.values()[k];
+            }
+        }
+    }
+
+    @Override
+    public SparseJacobian sparseJacobian() {
+        return sparse;
+    }
+}

@@ -8,7 +8,8 @@ import org.phasewright.runtime.study.EquilibriumResult;
 
 /**
  * equilibria.csv: name, coordinates (one column per state), eigenvalue k as columns lambda{k}_re and lambda{k}_im
- * (sorted by real part, descending), type, and the stable, unstable and centre dimensions.
+ * (sorted by real part, descending; none for equilibria too large to classify), type, and the stable, unstable and
+ * centre dimensions.
  */
 public final class EquilibriaCsv {
     private EquilibriaCsv() {
@@ -19,7 +20,9 @@ public final class EquilibriaCsv {
         List<String> header = new ArrayList<>();
         header.add("name");
         header.addAll(stateNames);
-        for (int k = 1; k <= stateNames.size(); k++) {
+        // equilibria of large models are not classified and carry no eigenvalues: only columns some row fills
+        int eigenvalues = result.equilibria().stream().mapToInt(e -> e.eigenvaluesReal().length).max().orElse(0);
+        for (int k = 1; k <= eigenvalues; k++) {
             header.add("lambda" + k + "_re");
             header.add("lambda" + k + "_im");
         }
@@ -34,9 +37,9 @@ public final class EquilibriaCsv {
                 }
                 double[] re = e.eigenvaluesReal();
                 double[] im = e.eigenvaluesImag();
-                for (int k = 0; k < re.length; k++) {
-                    row.add(Csv.number(re[k]));
-                    row.add(Csv.number(im[k]));
+                for (int k = 0; k < eigenvalues; k++) {
+                    row.add(k < re.length ? Csv.number(re[k]) : "");
+                    row.add(k < re.length ? Csv.number(im[k]) : "");
                 }
                 row.add(e.type());
                 row.add(Integer.toString(e.classification().stableDimension()));

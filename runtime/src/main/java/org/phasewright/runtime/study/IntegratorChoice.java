@@ -20,6 +20,18 @@ final class IntegratorChoice {
         };
     }
 
+    /**
+     * Why {@code method} cannot run on {@code model}, or null when it can: the stiff solver of a large model needs a
+     * sparse Jacobian, which a model with too many nonzeros (e.g. an all-to-all sum) does not get.
+     */
+    static String unavailable(IntegrationMethod method, CompiledModel model) {
+        if (method == IntegrationMethod.STIFF && model.field().large() && model.field().sparseJacobian() == null) {
+            return "the stiff method needs a sparse Jacobian, and this model of " + model.dimension()
+                    + " states couples too many of them; use the explicit method or fewer states";
+        }
+        return null;
+    }
+
     /** Coarse status of an integration's ending. */
     static Status status(org.phasewright.runtime.integrate.IntegrationOutcome outcome) {
         return switch (outcome.ending()) {

@@ -38,6 +38,10 @@ final class SectionRunner {
         } catch (ModelEvaluationException e) {
             return new SectionResult(null, null, endTime, Status.FAILED, "INVALID_INPUT", e.getMessage());
         }
+        String unavailable = IntegratorChoice.unavailable(section.method(), model);
+        if (unavailable != null) {
+            return new SectionResult(null, null, endTime, Status.FAILED, "MODEL_TOO_LARGE", unavailable);
+        }
         IntegratorSettings integratorSettings = IntegratorSettings.DEFAULT
                 .withTolerances(rtol, rtol * SimulationRunner.ATOL_PER_RTOL)
                 .withMaxSteps(settings.maxSteps())

@@ -56,6 +56,10 @@ final class SimulationRunner {
             return new SimulationResult(null, null, endTime, rtol, Status.FAILED, "INVALID_INPUT", e.getMessage());
         }
 
+        String unavailable = IntegratorChoice.unavailable(simulation.method(), model);
+        if (unavailable != null) {
+            return new SimulationResult(null, null, endTime, rtol, Status.FAILED, "MODEL_TOO_LARGE", unavailable);
+        }
         IntegratorSettings integratorSettings = IntegratorSettings.DEFAULT
                 .withTolerances(rtol, rtol * ATOL_PER_RTOL)
                 .withMaxSteps(settings.maxSteps())

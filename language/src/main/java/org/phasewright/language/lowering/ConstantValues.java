@@ -39,8 +39,9 @@ public final class ConstantValues {
         ConstantValues constants = new ConstantValues(new ExpressionLowering(variables), values);
         DependencyOrder<ParamDecl> order = DependencyOrder.ofParams(model);
         for (ParamDecl param : order.ordered()) {
-            if (!order.cycles().containsKey(param)) {
-                values[params.indexOf(param)] = constants.evaluate(param.getValue()).orElse(Double.NaN);
+            int at = params.indexOf(param); // -1 for a param reached by a reference outside this model
+            if (at >= 0 && !order.cycles().containsKey(param)) {
+                values[at] = constants.evaluate(param.getValue()).orElse(Double.NaN);
             }
         }
         return constants;

@@ -48,13 +48,7 @@ final class IndexedEvaluator {
             case Binary b -> {
                 double l = evaluate(b.left(), t, u, p, dv);
                 double r = evaluate(b.right(), t, u, p, dv);
-                yield switch (b.operator()) {
-                    case ADD -> l + r;
-                    case SUBTRACT -> l - r;
-                    case MULTIPLY -> l * r;
-                    case DIVIDE -> l / r;
-                    case POWER -> Arithmetic.power(l, r);
-                };
+                yield Arithmetic.binary(b.operator(), l, r);
             }
             case Call c -> {
                 double a = evaluate(c.arguments().get(0), t, u, p, dv);

@@ -57,8 +57,15 @@ final class JavaExpressionWriter {
         return out.toString();
     }
 
-    BitSet powersUsed() {
-        return powersUsed;
+    /** Appends the {@code pw<n>} helpers the written expressions call, one per exponent used. */
+    void writePowerHelpers(StringBuilder body) {
+        for (int m = powersUsed.nextSetBit(0); m >= 0; m = powersUsed.nextSetBit(m + 1)) {
+            body.append("\n    private static double pw").append(m).append("(double x) { return x");
+            for (int r = 1; r < m; r++) {
+                body.append(" * x"); // left to right, exactly as Arithmetic.power multiplies
+            }
+            body.append("; }\n");
+        }
     }
 
     private void write(Expr e, StringBuilder out, Indexed ix) {

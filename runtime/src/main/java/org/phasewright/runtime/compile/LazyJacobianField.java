@@ -8,26 +8,15 @@ import org.phasewright.runtime.symbolic.SymbolicJacobian;
  * compile for indexed models with sums) only the first time an analysis asks for it. Simulations of large models
  * never pay for it. Thread-safe like the generated code it wraps.
  */
-final class LazyJacobianField implements VectorField, DerivedValues {
+final class LazyJacobianField extends ForwardingVectorField implements DerivedValues {
     private final DynamicalModel model;
-    private final VectorField rates;
     private final DerivedValues derived;
     private volatile VectorField dense;
 
     LazyJacobianField(DynamicalModel model, VectorField rates, DerivedValues derived) {
+        super(rates);
         this.model = model;
-        this.rates = rates;
         this.derived = derived;
-    }
-
-    @Override
-    public int dimension() {
-        return rates.dimension();
-    }
-
-    @Override
-    public void rates(double t, double[] u, double[] p, double[] dudt) {
-        rates.rates(t, u, p, dudt);
     }
 
     @Override
@@ -64,20 +53,15 @@ final class LazyJacobianField implements VectorField, DerivedValues {
             return (VectorField) ModelCompiler.load(new JavaSourceGenerator(model, jacobian).generate());
         } catch (Exception | LinkageError | StackOverflowError e) {
             InterpretedVectorField interpreter = new InterpretedVectorField(model, jacobian);
-            return new VectorField() {
-                @Override
-                public int dimension() {
-                    return interpreter.dimension();
-                }
-
+            return new ForwardingVectorField(interpreter) {
                 @Override
                 public synchronized void rates(double t, double[] u, double[] p, double[] dudt) {
-                    interpreter.rates(t, u, p, dudt);
+                    super.rates(t, u, p, dudt);
                 }
 
                 @Override
                 public synchronized void jacobian(double t, double[] u, double[] p, double[] jacRowMajor) {
-                    interpreter.jacobian(t, u, p, jacRowMajor);
+                    super.jacobian(t, u, p, jacRowMajor);
                 }
             };
         }

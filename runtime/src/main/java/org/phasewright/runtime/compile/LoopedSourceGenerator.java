@@ -1,7 +1,6 @@
 package org.phasewright.runtime.compile;
 
 import java.util.ArrayList;
-import java.util.BitSet;
 import java.util.List;
 
 import org.phasewright.runtime.model.DerivedQuantity;
@@ -139,14 +138,7 @@ final class LoopedSourceGenerator {
         }
         body.append("    }\n");
 
-        BitSet powers = writer.powersUsed();
-        for (int m = powers.nextSetBit(0); m >= 0; m = powers.nextSetBit(m + 1)) {
-            body.append("\n    private static double pw").append(m).append("(double x) { return x");
-            for (int r = 1; r < m; r++) {
-                body.append(" * x"); // left to right, exactly as Arithmetic.power multiplies
-            }
-            body.append("; }\n");
-        }
+        writer.writePowerHelpers(body);
         body.append(FamilyLoopWriter.HELPERS).append(methods);
 
         return "package " + JavaSourceGenerator.PACKAGE + ";\n\n"

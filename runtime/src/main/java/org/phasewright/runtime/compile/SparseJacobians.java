@@ -60,16 +60,15 @@ public final class SparseJacobians {
     }
 
     /** Delegates the rates and the dense Jacobian; adds the sparse one. */
-    private static final class WithSparseJacobian implements VectorField {
+    private static final class WithSparseJacobian extends ForwardingVectorField {
         private final DynamicalModel model;
-        private final VectorField field;
         private final boolean large;
         private volatile SparseJacobian sparse;
         private volatile boolean made;
 
         WithSparseJacobian(DynamicalModel model, VectorField field, boolean large) {
+            super(field);
             this.model = model;
-            this.field = field;
             this.large = large;
         }
 
@@ -79,26 +78,11 @@ public final class SparseJacobians {
         }
 
         @Override
-        public int dimension() {
-            return field.dimension();
-        }
-
-        @Override
-        public void rates(double t, double[] u, double[] p, double[] dudt) {
-            field.rates(t, u, p, dudt);
-        }
-
-        @Override
-        public void jacobian(double t, double[] u, double[] p, double[] jacRowMajor) {
-            field.jacobian(t, u, p, jacRowMajor);
-        }
-
-        @Override
         public SparseJacobian sparseJacobian() {
             if (!made) {
                 synchronized (this) {
                     if (!made) {
-                        sparse = of(model, field);
+                        sparse = of(model, delegate);
                         made = true;
                     }
                 }

@@ -9,7 +9,6 @@ import org.phasewright.runtime.ensemble.BasinPoint;
 import org.phasewright.runtime.ensemble.BasinPoints;
 import org.phasewright.runtime.ensemble.EnsembleFailure;
 import org.phasewright.runtime.ensemble.EnsembleRun;
-import org.phasewright.runtime.ensemble.IntegrationRecipe;
 import org.phasewright.runtime.equilibria.Equilibrium;
 import org.phasewright.runtime.model.Basins;
 import org.phasewright.runtime.symbolic.ModelEvaluationException;
@@ -23,19 +22,16 @@ final class BasinsRunner {
     }
 
     static BasinsResult run(CompiledModel model, Basins request, RunSettings settings, Budget budget) {
-        double[] p = model.parameters();
-        Axis first, second;
-        double endTime, rtol;
+        EnsembleGrid grid;
         try {
-            first = Ensembles.axis(request.first(), p);
-            second = Ensembles.axis(request.second(), p);
-            Ensembles.checkGrid(first, second);
-            endTime = Ensembles.positive(request.endTime(), p, "end time");
-            rtol = Ensembles.tolerance(request.tolerance(), p, SimulationRunner.DEFAULT_RTOL);
+            grid = EnsembleGrid.of(request.first(), request.second(), request.endTime(), request.tolerance(),
+                    SimulationRunner.DEFAULT_RTOL, model.parameters(), settings);
         } catch (ModelEvaluationException e) {
             return new BasinsResult(null, null, Double.NaN, null, null, null, Status.FAILED, "INVALID_INPUT",
                     e.getMessage());
         }
+        Axis first = grid.first(), second = grid.second();
+        double endTime = grid.endTime();
         EquilibriumResult search = EquilibriumSearchRunner.run(model, null, settings, budget);
         if (search.status() == Status.FAILED) {
             return new BasinsResult(first, second, endTime, null, null, null, Status.FAILED, search.outcome(),
@@ -43,8 +39,7 @@ final class BasinsRunner {
         }
         List<Equilibrium> equilibria = search.equilibria();
         double[][] coordinates = equilibria.stream().map(Equilibrium::coordinates).toArray(double[][]::new);
-        BasinPoints task = BasinPoints.of(model, first, second, endTime, new IntegrationRecipe(rtol,
-                rtol * SimulationRunner.ATOL_PER_RTOL, settings.maxSteps(), settings.blowUpBound()), coordinates);
+        BasinPoints task = BasinPoints.of(model, first, second, endTime, grid.recipe(), coordinates);
         EnsembleRun<BasinPoint> run;
         try {
             run = settings.ensembles().run(task, model, Ensembles.control(settings, budget, "basins " + first.name()
@@ -67,12 +62,7 @@ final class BasinsRunner {
         for (int e = 0; e < equilibria.size(); e++) {
             message.append(' ').append(equilibria.get(e).name()).append(' ').append(counts[e]).append(',');
         }
-        message.append(" none ").append(counts[equilibria.size()]).append(switch (ending) {
-            case "SOME_FAILED" -> "; some integrations ended early";
-            case "TIME_LIMIT" -> "; stopped at the wall-time limit";
-            case "CANCELLED" -> "; cancelled";
-            default -> "";
-        });
+        message.append(" none ").append(counts[equilibria.size()]).append(Ensembles.endingNote(ending));
         return new BasinsResult(first, second, endTime, equilibria, run.rows(), run.executor(),
                 Ensembles.status(ending), ending, message.toString());
     }

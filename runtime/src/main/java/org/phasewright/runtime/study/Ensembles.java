@@ -72,6 +72,16 @@ final class Ensembles {
         return endings.stream().allMatch("COMPLETED"::equals) ? "COMPLETED" : "SOME_FAILED";
     }
 
+    /** What a run's message adds for its ending (nothing when it completed). */
+    static String endingNote(String ending) {
+        return switch (ending) {
+            case "SOME_FAILED" -> "; some integrations ended early";
+            case "TIME_LIMIT" -> "; stopped at the wall-time limit";
+            case "CANCELLED" -> "; cancelled";
+            default -> "";
+        };
+    }
+
     static Status status(String ending) {
         return ending.equals("COMPLETED") ? Status.COMPLETED : Status.INCOMPLETE;
     }

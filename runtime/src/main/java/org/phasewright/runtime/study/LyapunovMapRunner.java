@@ -8,7 +8,6 @@ import org.phasewright.runtime.compile.CompiledModel;
 import org.phasewright.runtime.ensemble.Axis;
 import org.phasewright.runtime.ensemble.EnsembleFailure;
 import org.phasewright.runtime.ensemble.EnsembleRun;
-import org.phasewright.runtime.ensemble.IntegrationRecipe;
 import org.phasewright.runtime.ensemble.LyapunovPoint;
 import org.phasewright.runtime.ensemble.LyapunovPoints;
 import org.phasewright.runtime.model.LyapunovMap;
@@ -20,21 +19,17 @@ final class LyapunovMapRunner {
     }
 
     static LyapunovMapResult run(CompiledModel model, LyapunovMap request, RunSettings settings, Budget budget) {
-        double[] p = model.parameters();
-        Axis first, second;
-        double endTime, rtol;
+        EnsembleGrid grid;
         try {
-            first = Ensembles.axis(request.first(), p);
-            second = Ensembles.axis(request.second(), p);
-            Ensembles.checkGrid(first, second);
-            endTime = Ensembles.positive(request.endTime(), p, "end time");
-            rtol = Ensembles.tolerance(request.tolerance(), p, LyapunovRunner.DEFAULT_RTOL);
+            grid = EnsembleGrid.of(request.first(), request.second(), request.endTime(), request.tolerance(),
+                    LyapunovRunner.DEFAULT_RTOL, model.parameters(), settings);
         } catch (ModelEvaluationException e) {
             return new LyapunovMapResult(null, null, Double.NaN, null, null, Status.FAILED, "INVALID_INPUT",
                     e.getMessage());
         }
-        LyapunovPoints task = LyapunovPoints.of(model, first, second, endTime, new IntegrationRecipe(rtol,
-                rtol * SimulationRunner.ATOL_PER_RTOL, settings.maxSteps(), settings.blowUpBound()));
+        Axis first = grid.first(), second = grid.second();
+        double endTime = grid.endTime();
+        LyapunovPoints task = LyapunovPoints.of(model, first, second, endTime, grid.recipe());
         String name = "lyapunov map " + first.name() + " x " + second.name();
         EnsembleRun<LyapunovPoint> run;
         try {
@@ -60,12 +55,7 @@ final class LyapunovMapRunner {
         String message = String.format(Locale.ROOT, "%d of %d points on %s; largest exponent from %.4g to %.4g",
                 endings.size(), task.points(), run.executor(), smallest, largest)
                 + (unconverged > 0 ? "; " + unconverged + " not converged (integrate longer)" : "")
-                + switch (ending) {
-                    case "SOME_FAILED" -> "; some integrations ended early";
-                    case "TIME_LIMIT" -> "; stopped at the wall-time limit";
-                    case "CANCELLED" -> "; cancelled";
-                    default -> "";
-                };
+                + Ensembles.endingNote(ending);
         return new LyapunovMapResult(first, second, endTime, run.rows(), run.executor(), Ensembles.status(ending),
                 ending, message);
     }

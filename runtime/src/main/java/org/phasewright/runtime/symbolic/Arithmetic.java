@@ -1,5 +1,6 @@
 package org.phasewright.runtime.symbolic;
 
+import org.phasewright.runtime.model.BinaryOperator;
 import org.phasewright.runtime.model.MathFunction;
 
 /**
@@ -32,6 +33,17 @@ public final class Arithmetic {
             product = product * x;
         }
         return n > 0 ? product : 1.0 / product;
+    }
+
+    /** {@code l op r}; the one step both tree-walking evaluators share, so they cannot drift apart. */
+    public static double binary(BinaryOperator op, double l, double r) {
+        return switch (op) {
+            case ADD -> l + r;
+            case SUBTRACT -> l - r;
+            case MULTIPLY -> l * r;
+            case DIVIDE -> l / r;
+            case POWER -> power(l, r);
+        };
     }
 
     public static double apply(MathFunction f, double a, double b) {

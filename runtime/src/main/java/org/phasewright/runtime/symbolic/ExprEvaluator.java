@@ -33,13 +33,7 @@ public final class ExprEvaluator {
             case Binary b -> {
                 double l = evaluate(b.left(), t, states, parameters, derived);
                 double r = evaluate(b.right(), t, states, parameters, derived);
-                yield switch (b.operator()) {
-                    case ADD -> l + r;
-                    case SUBTRACT -> l - r;
-                    case MULTIPLY -> l * r;
-                    case DIVIDE -> l / r;
-                    case POWER -> Arithmetic.power(l, r);
-                };
+                yield Arithmetic.binary(b.operator(), l, r);
             }
             case Call c -> {
                 double a = evaluate(c.arguments().get(0), t, states, parameters, derived);

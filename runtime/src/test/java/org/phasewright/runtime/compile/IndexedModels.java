@@ -1,5 +1,11 @@
 package org.phasewright.runtime.compile;
 
+import static org.phasewright.runtime.TestModels.add;
+import static org.phasewright.runtime.TestModels.c;
+import static org.phasewright.runtime.TestModels.div;
+import static org.phasewright.runtime.TestModels.mul;
+import static org.phasewright.runtime.TestModels.sub;
+
 import java.util.ArrayList;
 import java.util.List;
 
@@ -23,26 +29,6 @@ import org.phasewright.runtime.model.Variable;
 /** Indexed test models built with the assembler (the notation for them is being added to the language). */
 final class IndexedModels {
     private IndexedModels() {
-    }
-
-    static Expr c(double v) {
-        return new Constant(v);
-    }
-
-    static Expr add(Expr a, Expr b) {
-        return new Binary(BinaryOperator.ADD, a, b);
-    }
-
-    static Expr sub(Expr a, Expr b) {
-        return new Binary(BinaryOperator.SUBTRACT, a, b);
-    }
-
-    static Expr mul(Expr a, Expr b) {
-        return new Binary(BinaryOperator.MULTIPLY, a, b);
-    }
-
-    static Expr div(Expr a, Expr b) {
-        return new Binary(BinaryOperator.DIVIDE, a, b);
     }
 
     static Expr pow(Expr a, double n) {

@@ -1,5 +1,6 @@
 package org.phasewright.runtime.linalg;
 
+import org.phasewright.runtime.compile.ForwardingVectorField;
 import org.phasewright.runtime.compile.SparseJacobian;
 import org.phasewright.runtime.compile.SparseJacobians;
 import org.phasewright.runtime.compile.VectorField;
@@ -9,7 +10,16 @@ import org.phasewright.runtime.model.DynamicalModel;
  * A field that claims to be large (sparse path) or small (dense path) whatever its dimension, so tests can run the
  * same problem both ways.
  */
-public record Forced(VectorField field, SparseJacobian sparse, boolean large) implements VectorField {
+public final class Forced extends ForwardingVectorField {
+    private final SparseJacobian sparse;
+    private final boolean large;
+
+    private Forced(VectorField field, SparseJacobian sparse, boolean large) {
+        super(field);
+        this.sparse = sparse;
+        this.large = large;
+    }
+
     public static Forced sparse(DynamicalModel model, VectorField field) {
         return new Forced(field, SparseJacobians.of(model, field), true);
     }
@@ -23,19 +33,9 @@ public record Forced(VectorField field, SparseJacobian sparse, boolean large) im
     }
 
     @Override
-    public int dimension() {
-        return field.dimension();
-    }
-
-    @Override
-    public void rates(double t, double[] u, double[] p, double[] dudt) {
-        field.rates(t, u, p, dudt);
-    }
-
-    @Override
     public void jacobian(double t, double[] u, double[] p, double[] jac) {
         if (sparse == null) {
-            field.jacobian(t, u, p, jac);
+            super.jacobian(t, u, p, jac);
             return;
         }
         SparseMatrix m = sparse.newMatrix();
@@ -52,5 +52,10 @@ public record Forced(VectorField field, SparseJacobian sparse, boolean large) im
     @Override
     public SparseJacobian sparseJacobian() {
         return sparse;
+    }
+
+    @Override
+    public boolean large() {
+        return large;
     }
 }

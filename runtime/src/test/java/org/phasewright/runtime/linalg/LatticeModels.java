@@ -1,12 +1,17 @@
 package org.phasewright.runtime.linalg;
 
+import static org.phasewright.runtime.TestModels.add;
+import static org.phasewright.runtime.TestModels.c;
+import static org.phasewright.runtime.TestModels.call;
+import static org.phasewright.runtime.TestModels.div;
+import static org.phasewright.runtime.TestModels.mul;
+import static org.phasewright.runtime.TestModels.sub;
+
 import java.util.List;
 
 import org.phasewright.runtime.assemble.ModelAssembler;
 import org.phasewright.runtime.model.Binary;
 import org.phasewright.runtime.model.BinaryOperator;
-import org.phasewright.runtime.model.Call;
-import org.phasewright.runtime.model.Constant;
 import org.phasewright.runtime.model.DynamicalModel;
 import org.phasewright.runtime.model.Expr;
 import org.phasewright.runtime.model.Family;
@@ -20,30 +25,6 @@ import org.phasewright.runtime.model.Variable;
 /** Indexed test models built with the assembler: rings, chains and a mean-field lattice. */
 public final class LatticeModels {
     private LatticeModels() {
-    }
-
-    static Expr c(double v) {
-        return new Constant(v);
-    }
-
-    static Expr add(Expr a, Expr b) {
-        return new Binary(BinaryOperator.ADD, a, b);
-    }
-
-    static Expr sub(Expr a, Expr b) {
-        return new Binary(BinaryOperator.SUBTRACT, a, b);
-    }
-
-    static Expr mul(Expr a, Expr b) {
-        return new Binary(BinaryOperator.MULTIPLY, a, b);
-    }
-
-    static Expr div(Expr a, Expr b) {
-        return new Binary(BinaryOperator.DIVIDE, a, b);
-    }
-
-    static Expr call(MathFunction f, Expr a) {
-        return new Call(f, List.of(a));
     }
 
     /** {@code i + offset}. */

@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 import org.phasewright.runtime.TestModels;
 import org.phasewright.runtime.compile.CompiledModel;
+import org.phasewright.runtime.compile.ForwardingVectorField;
 import org.phasewright.runtime.compile.ModelCompiler;
 import org.phasewright.runtime.compile.SparseJacobian;
 import org.phasewright.runtime.compile.SparseJacobians;
@@ -19,25 +20,17 @@ class LeadingLyapunovTest {
     private static final IntegratorSettings TIGHT = IntegratorSettings.DEFAULT.withTolerances(1e-9, 1e-11);
 
     /** A small model's field that also offers its sparse Jacobian, so both tangent paths can be compared. */
-    record WithSparse(VectorField field, SparseJacobian sparse) implements VectorField {
+    static final class WithSparse extends ForwardingVectorField {
+        private final SparseJacobian sparse;
+
+        private WithSparse(VectorField field, SparseJacobian sparse) {
+            super(field);
+            this.sparse = sparse;
+        }
+
         static WithSparse of(DynamicalModel model) {
             VectorField field = ModelCompiler.compile(model).field();
             return new WithSparse(field, SparseJacobians.of(model, field));
-        }
-
-        @Override
-        public int dimension() {
-            return field.dimension();
-        }
-
-        @Override
-        public void rates(double t, double[] u, double[] p, double[] dudt) {
-            field.rates(t, u, p, dudt);
-        }
-
-        @Override
-        public void jacobian(double t, double[] u, double[] p, double[] jac) {
-            field.jacobian(t, u, p, jac);
         }
 
         @Override

@@ -1,7 +1,5 @@
 package org.phasewright.runtime.integrate;
 
-import org.phasewright.runtime.linalg.Vectors;
-
 import org.phasewright.runtime.compile.VectorField;
 
 /**
@@ -39,10 +37,8 @@ public final class DormandPrince54 implements Integrator {
     // Step-size control constants of DOPRI5.
     private static final double SAFETY = 0.9, FAC_MIN = 0.2, FAC_MAX = 10.0, BETA = 0.04;
     private static final double EXPO = 0.2 - BETA * 0.75;
-    private static final double UROUND = 2.3e-16;
-    // Stiffness test of DOPRI5: boundary of the stability region along the negative axis, and how often to test.
+    // Stiffness test of DOPRI5: boundary of the stability region along the negative axis.
     private static final double STIFF_BOUNDARY = 3.25;
-    private static final int STIFF_TEST_EVERY = 1000, STIFF_CONFIRMATIONS = 15, NONSTIFF_RESET = 6;
 
     private final VectorField field;
     private final double[] p;
@@ -83,67 +79,31 @@ public final class DormandPrince54 implements Integrator {
     @Override
     public IntegrationOutcome integrate(double t0, double[] u0, double tEnd, IntegratorSettings s,
             StepObserver observer) {
-        if (u0.length != n) {
-            throw new IllegalArgumentException("start vector has " + u0.length + " entries, model has " + n);
+        AdaptiveStepDriver b = new AdaptiveStepDriver(s, observer, dense);
+        IntegrationOutcome early = b.begin(t0, u0, tEnd, y, field, p, k1);
+        if (early != null) {
+            return early;
         }
-        if (!Double.isFinite(t0) || !Double.isFinite(tEnd)) {
-            throw new IllegalArgumentException("times must be finite: " + t0 + ", " + tEnd);
-        }
-        Counters c = new Counters();
-        System.arraycopy(u0, 0, y, 0, n);
         double t = t0;
-        if (!Vectors.allFinite(y)) {
-            return c.outcome(IntegrationOutcome.Ending.NOT_FINITE, t, y, 0, s);
-        }
-        field.rates(t, y, p, k1);
-        c.evaluations++;
-        if (!Vectors.allFinite(k1)) {
-            return c.outcome(IntegrationOutcome.Ending.NOT_FINITE, t, y, 0, s);
-        }
-        if (observer != null) {
-            observer.start(t, y);
-        }
-        if (Vectors.normInf(y) > s.blowUpBound()) {
-            return c.outcome(IntegrationOutcome.Ending.BLEW_UP, t, y, 0, s);
-        }
-        if (t0 == tEnd || n == 0) { // nothing to integrate (a model without states is trivially done)
-            return c.outcome(IntegrationOutcome.Ending.COMPLETED, tEnd, y, 0, s);
-        }
         double[] rtol = s.relativeTolerances(n);
         double[] atol = s.absoluteTolerances(n);
         boolean uniformTolerances = s.componentRelativeTolerances() == null
                 && s.componentAbsoluteTolerances() == null;
-        double direction = Math.signum(tEnd - t0);
-        double hMax = Math.min(s.maxStep(), Math.abs(tEnd - t0));
-        double h = direction * (s.initialStep() > 0 ? Math.min(s.initialStep(), hMax) : initialStep(t, hMax,
-                direction, rtol, atol, c));
-        double timeScale = Math.max(Math.abs(t0), Math.abs(tEnd));
+        double direction = b.direction;
+        double h = direction * (s.initialStep() > 0 ? Math.min(s.initialStep(), b.hMax)
+                : b.initialStep(field, p, t, y, k1, yStage, k2, rtol, atol, 5));
         double facOld = 1e-4;
-        boolean rejectedLast = false;
-        boolean nonFiniteLast = false;
-        long attempts = 0;
-        int stiffCount = 0, nonStiffCount = 0;
 
         while (true) {
-            if (attempts >= s.maxSteps()) {
-                return c.outcome(IntegrationOutcome.Ending.STEP_LIMIT, t, y, h, s);
-            }
-            if (s.cancelled().getAsBoolean()) {
-                return c.outcome(IntegrationOutcome.Ending.CANCELLED, t, y, h, s);
-            }
-            if (s.deadlineNanos() != Long.MAX_VALUE && System.nanoTime() - s.deadlineNanos() > 0) {
-                return c.outcome(IntegrationOutcome.Ending.TIME_LIMIT, t, y, h, s);
-            }
-            if (0.1 * Math.abs(h) <= UROUND * Math.max(Math.abs(t), timeScale * 1e-3)) {
-                return c.outcome(nonFiniteLast ? IntegrationOutcome.Ending.NOT_FINITE
-                        : IntegrationOutcome.Ending.STEP_SIZE_UNDERFLOW, t, y, h, s);
+            IntegrationOutcome budget = b.beforeAttempt(t, y, h);
+            if (budget != null) {
+                return budget;
             }
             boolean last = false;
             if ((t + 1.01 * h - tEnd) * direction >= 0) {
                 h = tEnd - t;
                 last = true;
             }
-            attempts++;
 
             for (int i = 0; i < n; i++) {
                 yStage[i] = y[i] + h * A21 * k1[i];
@@ -174,7 +134,7 @@ public final class DormandPrince54 implements Integrator {
                 errPart[i] = E1 * k1i + E3 * k3i + E4 * k4i + E5 * k5i + E6 * k6i;
             }
             field.rates(tNew, yNew, p, k7);
-            c.evaluations += 6;
+            b.evaluations += 6;
 
             double err = 0;
             double finite = 0; // x - x is 0 for finite x and NaN otherwise, so this is NaN if some yNew[i] is not
@@ -200,15 +160,10 @@ public final class DormandPrince54 implements Integrator {
                 }
             }
             err = Math.sqrt(err / n);
-            if (!Double.isFinite(err) || finite != 0) {
-                // Overflow or NaN in a trial step: often the step was too bold, so shrink hard and retry.
-                c.rejected++;
-                rejectedLast = true;
-                nonFiniteLast = true;
+            if (b.rejectedAsNotFinite(!Double.isFinite(err) || finite != 0)) {
                 h *= 0.1;
                 continue;
             }
-            nonFiniteLast = false;
 
             double fac11 = Math.pow(err, EXPO);
             double fac = fac11 / Math.pow(facOld, BETA);
@@ -216,23 +171,8 @@ public final class DormandPrince54 implements Integrator {
             double hNew = h / fac;
             if (err <= 1.0) {
                 facOld = Math.max(err, 1e-4);
-                c.accepted++;
-                if (Double.isNaN(c.stiffAt) && (c.accepted % STIFF_TEST_EVERY == 0 || stiffCount > 0)) {
-                    double num = 0, den = 0;
-                    for (int i = 0; i < n; i++) {
-                        double dk = k7[i] - k6[i], dy = yNew[i] - yStage[i];
-                        num += dk * dk;
-                        den += dy * dy;
-                    }
-                    if (den > 0 && Math.abs(h) * Math.sqrt(num / den) > STIFF_BOUNDARY) {
-                        nonStiffCount = 0;
-                        if (++stiffCount == STIFF_CONFIRMATIONS) {
-                            c.stiffAt = tNew;
-                        }
-                    } else if (++nonStiffCount == NONSTIFF_RESET) {
-                        stiffCount = 0;
-                    }
-                }
+                b.accepted++;
+                b.testStiffness(h, tNew, k7, k6, yNew, yStage, STIFF_BOUNDARY);
                 if (observer != null) {
                     prepareDense(h);
                 }
@@ -244,30 +184,15 @@ public final class DormandPrince54 implements Integrator {
                 swap = k1; // first same as last: f(t_new, y_new) is the next step's first stage
                 k1 = k7;
                 k7 = swap;
-                if (observer != null) {
-                    dense.set(tOld, t, h);
-                    observer.step(dense);
-                    if (observer.stopRequested()) {
-                        return c.outcome(IntegrationOutcome.Ending.STOPPED, t, y, h, s);
-                    }
+                // |y|_inf of the accepted point was measured in the error pass
+                IntegrationOutcome end = b.accept(tOld, t, h, y, last, largest);
+                if (end != null) {
+                    return end;
                 }
-                if (largest > s.blowUpBound()) { // |y|_inf of the accepted point, measured in the error pass
-                    return c.outcome(IntegrationOutcome.Ending.BLEW_UP, t, y, h, s);
-                }
-                if (last) {
-                    return c.outcome(IntegrationOutcome.Ending.COMPLETED, t, y, h, s);
-                }
-                if (Math.abs(hNew) > hMax) {
-                    hNew = direction * hMax;
-                }
-                if (rejectedLast) { // do not grow straight after a rejection
-                    hNew = direction * Math.min(Math.abs(hNew), Math.abs(h));
-                }
-                rejectedLast = false;
+                hNew = b.nextStep(hNew, h);
             } else {
                 hNew = h / Math.min(1 / FAC_MIN, fac11 / SAFETY);
-                rejectedLast = true;
-                c.rejected++;
+                b.reject();
             }
             h = hNew;
         }
@@ -286,56 +211,8 @@ public final class DormandPrince54 implements Integrator {
         }
     }
 
-    /** Starting step size, HNW Section II.4 as coded in DOPRI5's HINIT. */
-    private double initialStep(double t, double hMax, double direction, double[] rtol, double[] atol, Counters c) {
-        double dnf = 0, dny = 0;
-        for (int i = 0; i < n; i++) {
-            double sk = atol[i] + rtol[i] * Math.abs(y[i]);
-            dnf += (k1[i] / sk) * (k1[i] / sk);
-            dny += (y[i] / sk) * (y[i] / sk);
-        }
-        double h = (dnf <= 1e-10 || dny <= 1e-10) ? 1e-6 : Math.sqrt(dny / dnf) * 0.01;
-        h = Math.min(h, hMax);
-        for (int i = 0; i < n; i++) {
-            yStage[i] = y[i] + direction * h * k1[i];
-        }
-        field.rates(t + direction * h, yStage, p, k2);
-        c.evaluations++;
-        double der2 = 0;
-        for (int i = 0; i < n; i++) {
-            double sk = atol[i] + rtol[i] * Math.abs(y[i]);
-            double d = (k2[i] - k1[i]) / sk;
-            der2 += d * d;
-        }
-        der2 = Math.sqrt(der2) / h;
-        if (!Double.isFinite(der2)) {
-            return h;
-        }
-        double der12 = Math.max(der2, Math.sqrt(dnf));
-        double h1 = der12 <= 1e-15 ? Math.max(1e-6, h * 1e-3) : Math.pow(0.01 / der12, 1.0 / 5);
-        return Math.min(Math.min(100 * h, h1), hMax);
-    }
-
-    /** The last accepted step, seen by observers. */
-    private final class Dense implements DenseStep {
-        private double tOld, tNew, h;
-
-        void set(double tOld, double tNew, double h) {
-            this.tOld = tOld;
-            this.tNew = tNew;
-            this.h = h;
-        }
-
-        @Override
-        public double startTime() {
-            return tOld;
-        }
-
-        @Override
-        public double endTime() {
-            return tNew;
-        }
-
+    /** The last accepted step with the continuous extension of {@link #prepareDense}. */
+    private final class Dense extends AdaptiveStepDriver.View {
         @Override
         public void stateAt(double t, double[] out) {
             double theta = (t - tOld) / h;
@@ -343,22 +220,6 @@ public final class DormandPrince54 implements Integrator {
             for (int i = 0; i < n; i++) {
                 out[i] = r1[i] + theta * (r2[i] + theta1 * (r3[i] + theta * (r4[i] + theta1 * r5[i])));
             }
-        }
-
-        @Override
-        public double[] endState() {
-            return y;
-        }
-    }
-
-    private static final class Counters {
-        long evaluations, accepted, rejected;
-        double stiffAt = Double.NaN;
-
-        IntegrationOutcome outcome(IntegrationOutcome.Ending ending, double t, double[] state, double h,
-                IntegratorSettings s) {
-            return new IntegrationOutcome(ending, t, state, evaluations, accepted, rejected, h, s.blowUpBound(),
-                    stiffAt);
         }
     }
 }

@@ -180,9 +180,8 @@ public final class DormandPrince853 implements Integrator {
 
     // Step-size control of DOP853: safety factor, bounds on the step ratio, exponent 1/8.
     private static final double SAFETY = 0.9, FAC_MIN = 1.0 / 3, FAC_MAX = 6.0, EXPO = 1.0 / 8;
-    private static final double UROUND = 2.3e-16;
+    // Stiffness test of DOP853: boundary of the stability region along the negative axis.
     private static final double STIFF_BOUNDARY = 6.1;
-    private static final int STIFF_TEST_EVERY = 1000, STIFF_CONFIRMATIONS = 15, NONSTIFF_RESET = 6;
 
     private final VectorField field;
     private final double[] p;
@@ -229,70 +228,33 @@ public final class DormandPrince853 implements Integrator {
     @Override
     public IntegrationOutcome integrate(double t0, double[] u0, double tEnd, IntegratorSettings s,
             StepObserver observer) {
-        if (u0.length != n) {
-            throw new IllegalArgumentException("start vector has " + u0.length + " entries, model has " + n);
+        AdaptiveStepDriver b = new AdaptiveStepDriver(s, observer, dense);
+        IntegrationOutcome early = b.begin(t0, u0, tEnd, y, field, p, k0);
+        if (early != null) {
+            return early;
         }
-        if (!Double.isFinite(t0) || !Double.isFinite(tEnd)) {
-            throw new IllegalArgumentException("times must be finite: " + t0 + ", " + tEnd);
-        }
-        Counters c = new Counters();
-        System.arraycopy(u0, 0, y, 0, n);
         double t = t0;
-        if (!Vectors.allFinite(y)) {
-            return c.outcome(IntegrationOutcome.Ending.NOT_FINITE, t, y, 0, s);
-        }
-        field.rates(t, y, p, k0);
-        c.evaluations++;
-        if (!Vectors.allFinite(k0)) {
-            return c.outcome(IntegrationOutcome.Ending.NOT_FINITE, t, y, 0, s);
-        }
-        if (observer != null) {
-            observer.start(t, y);
-        }
-        if (Vectors.normInf(y) > s.blowUpBound()) {
-            return c.outcome(IntegrationOutcome.Ending.BLEW_UP, t, y, 0, s);
-        }
-        if (t0 == tEnd || n == 0) {
-            return c.outcome(IntegrationOutcome.Ending.COMPLETED, tEnd, y, 0, s);
-        }
         double[] rtol = s.relativeTolerances(n);
         double[] atol = s.absoluteTolerances(n);
-        double direction = Math.signum(tEnd - t0);
-        double hMax = Math.min(s.maxStep(), Math.abs(tEnd - t0));
-        double h = direction * (s.initialStep() > 0 ? Math.min(s.initialStep(), hMax)
-                : initialStep(t, hMax, direction, rtol, atol, c));
-        double timeScale = Math.max(Math.abs(t0), Math.abs(tEnd));
-        double facOld = 1e-4;
-        boolean rejectedLast = false;
-        boolean nonFiniteLast = false;
-        long attempts = 0;
-        int stiffCount = 0, nonStiffCount = 0;
+        double direction = b.direction;
+        double h = direction * (s.initialStep() > 0 ? Math.min(s.initialStep(), b.hMax)
+                : b.initialStep(field, p, t, y, k0, yStage, k1, rtol, atol, 8));
 
         while (true) {
-            if (attempts >= s.maxSteps()) {
-                return c.outcome(IntegrationOutcome.Ending.STEP_LIMIT, t, y, h, s);
-            }
-            if (s.cancelled().getAsBoolean()) {
-                return c.outcome(IntegrationOutcome.Ending.CANCELLED, t, y, h, s);
-            }
-            if (s.deadlineNanos() != Long.MAX_VALUE && System.nanoTime() - s.deadlineNanos() > 0) {
-                return c.outcome(IntegrationOutcome.Ending.TIME_LIMIT, t, y, h, s);
-            }
-            if (0.1 * Math.abs(h) <= UROUND * Math.max(Math.abs(t), timeScale * 1e-3)) {
-                return c.outcome(nonFiniteLast ? IntegrationOutcome.Ending.NOT_FINITE
-                        : IntegrationOutcome.Ending.STEP_SIZE_UNDERFLOW, t, y, h, s);
+            IntegrationOutcome budget = b.beforeAttempt(t, y, h);
+            if (budget != null) {
+                return budget;
             }
             boolean last = false;
             if ((t + 1.01 * h - tEnd) * direction >= 0) {
                 h = tEnd - t;
                 last = true;
             }
-            attempts++;
 
             stages(t, h);
             double tNew = last ? tEnd : t + h;
             field.rates(tNew, yNew, p, k12);
-            c.evaluations += 12;
+            b.evaluations += 12;
 
             double err5 = 0, err3 = 0;
             for (int i = 0; i < n; i++) {
@@ -305,40 +267,20 @@ public final class DormandPrince853 implements Integrator {
             }
             double deno = err5 + 0.01 * err3;
             double err = Math.abs(h) * err5 * Math.sqrt(1.0 / (n * (deno <= 0 ? 1.0 : deno)));
-            if (!Double.isFinite(err) || !Vectors.allFinite(yNew)) {
-                c.rejected++;
-                rejectedLast = true;
-                nonFiniteLast = true;
+            if (b.rejectedAsNotFinite(!Double.isFinite(err) || !Vectors.allFinite(yNew))) {
                 h *= 0.1;
                 continue;
             }
-            nonFiniteLast = false;
 
             double fac11 = Math.pow(err, EXPO);
             double fac = Math.max(1 / FAC_MAX, Math.min(1 / FAC_MIN, fac11 / SAFETY));
             double hNew = h / fac;
             if (err <= 1.0) {
-                facOld = Math.max(err, 1e-4);
-                c.accepted++;
-                if (Double.isNaN(c.stiffAt) && (c.accepted % STIFF_TEST_EVERY == 0 || stiffCount > 0)) {
-                    double num = 0, den = 0;
-                    for (int i = 0; i < n; i++) {
-                        double dk = k12[i] - k11[i], dy = yNew[i] - yStage[i];
-                        num += dk * dk;
-                        den += dy * dy;
-                    }
-                    if (den > 0 && Math.abs(h) * Math.sqrt(num / den) > STIFF_BOUNDARY) {
-                        nonStiffCount = 0;
-                        if (++stiffCount == STIFF_CONFIRMATIONS) {
-                            c.stiffAt = tNew;
-                        }
-                    } else if (++nonStiffCount == NONSTIFF_RESET) {
-                        stiffCount = 0;
-                    }
-                }
+                b.accepted++;
+                b.testStiffness(h, tNew, k12, k11, yNew, yStage, STIFF_BOUNDARY);
                 if (observer != null) {
                     prepareDense(t, h);
-                    c.evaluations += 3;
+                    b.evaluations += 3;
                 }
                 double tOld = t;
                 t = tNew;
@@ -348,30 +290,14 @@ public final class DormandPrince853 implements Integrator {
                 swap = k0; // the last stage f(t_new, y_new) is the next step's first
                 k0 = k12;
                 k12 = swap;
-                if (observer != null) {
-                    dense.set(tOld, t, h);
-                    observer.step(dense);
-                    if (observer.stopRequested()) {
-                        return c.outcome(IntegrationOutcome.Ending.STOPPED, t, y, h, s);
-                    }
+                IntegrationOutcome end = b.accept(tOld, t, h, y, last);
+                if (end != null) {
+                    return end;
                 }
-                if (Vectors.normInf(y) > s.blowUpBound()) {
-                    return c.outcome(IntegrationOutcome.Ending.BLEW_UP, t, y, h, s);
-                }
-                if (last) {
-                    return c.outcome(IntegrationOutcome.Ending.COMPLETED, t, y, h, s);
-                }
-                if (Math.abs(hNew) > hMax) {
-                    hNew = direction * hMax;
-                }
-                if (rejectedLast) {
-                    hNew = direction * Math.min(Math.abs(hNew), Math.abs(h));
-                }
-                rejectedLast = false;
+                hNew = b.nextStep(hNew, h);
             } else {
                 hNew = h / Math.min(1 / FAC_MIN, fac11 / SAFETY);
-                rejectedLast = true;
-                c.rejected++;
+                b.reject();
             }
             h = hNew;
         }
@@ -474,56 +400,8 @@ public final class DormandPrince853 implements Integrator {
         }
     }
 
-    /** Starting step size, HNW I Section II.4 as coded in DOP853's HINIT (order 8). */
-    private double initialStep(double t, double hMax, double direction, double[] rtol, double[] atol, Counters c) {
-        double dnf = 0, dny = 0;
-        for (int i = 0; i < n; i++) {
-            double sk = atol[i] + rtol[i] * Math.abs(y[i]);
-            dnf += (k0[i] / sk) * (k0[i] / sk);
-            dny += (y[i] / sk) * (y[i] / sk);
-        }
-        double h = (dnf <= 1e-10 || dny <= 1e-10) ? 1e-6 : Math.sqrt(dny / dnf) * 0.01;
-        h = Math.min(h, hMax);
-        for (int i = 0; i < n; i++) {
-            yStage[i] = y[i] + direction * h * k0[i];
-        }
-        field.rates(t + direction * h, yStage, p, k1);
-        c.evaluations++;
-        double der2 = 0;
-        for (int i = 0; i < n; i++) {
-            double sk = atol[i] + rtol[i] * Math.abs(y[i]);
-            double d = (k1[i] - k0[i]) / sk;
-            der2 += d * d;
-        }
-        der2 = Math.sqrt(der2) / h;
-        if (!Double.isFinite(der2)) {
-            return h;
-        }
-        double der12 = Math.max(der2, Math.sqrt(dnf));
-        double h1 = der12 <= 1e-15 ? Math.max(1e-6, h * 1e-3) : Math.pow(0.01 / der12, 1.0 / 8);
-        return Math.min(Math.min(100 * h, h1), hMax);
-    }
-
-    /** The last accepted step, seen by observers. */
-    private final class Dense implements DenseStep {
-        private double tOld, tNew, h;
-
-        void set(double tOld, double tNew, double h) {
-            this.tOld = tOld;
-            this.tNew = tNew;
-            this.h = h;
-        }
-
-        @Override
-        public double startTime() {
-            return tOld;
-        }
-
-        @Override
-        public double endTime() {
-            return tNew;
-        }
-
+    /** The last accepted step with the 7th-order continuous extension of {@link #prepareDense}. */
+    private final class Dense extends AdaptiveStepDriver.View {
         @Override
         public void stateAt(double t, double[] out) {
             double s = (t - tOld) / h;
@@ -532,22 +410,6 @@ public final class DormandPrince853 implements Integrator {
                 double tail = r5[i] + s * (r6[i] + s1 * (r7[i] + s * r8[i]));
                 out[i] = r1[i] + s * (r2[i] + s1 * (r3[i] + s * (r4[i] + s1 * tail)));
             }
-        }
-
-        @Override
-        public double[] endState() {
-            return y;
-        }
-    }
-
-    private static final class Counters {
-        long evaluations, accepted, rejected;
-        double stiffAt = Double.NaN;
-
-        IntegrationOutcome outcome(IntegrationOutcome.Ending ending, double t, double[] state, double h,
-                IntegratorSettings s) {
-            return new IntegrationOutcome(ending, t, state, evaluations, accepted, rejected, h, s.blowUpBound(),
-                    stiffAt);
         }
     }
 }

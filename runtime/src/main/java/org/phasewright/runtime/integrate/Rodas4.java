@@ -162,80 +162,50 @@ public final class Rodas4 implements Integrator {
     @Override
     public IntegrationOutcome integrate(double t0, double[] u0, double tEnd, IntegratorSettings s,
             StepObserver observer) {
-        if (u0.length != n) {
-            throw new IllegalArgumentException("start vector has " + u0.length + " entries, model has " + n);
+        AdaptiveStepDriver b = new AdaptiveStepDriver(s, observer, dense);
+        IntegrationOutcome early = b.begin(t0, u0, tEnd, y, field, p, null);
+        if (early != null) {
+            return early;
         }
-        if (!Double.isFinite(t0) || !Double.isFinite(tEnd)) {
-            throw new IllegalArgumentException("times must be finite: " + t0 + ", " + tEnd);
-        }
-        long evaluations = 0, accepted = 0, rejected = 0, jacobians = 0;
-        System.arraycopy(u0, 0, y, 0, n);
         double t = t0;
-        if (!Vectors.allFinite(y)) {
-            return outcome(IntegrationOutcome.Ending.NOT_FINITE, t, 0, s, evaluations, accepted, rejected);
-        }
-        if (observer != null) {
-            observer.start(t, y);
-        }
-        if (Vectors.normInf(y) > s.blowUpBound()) {
-            return outcome(IntegrationOutcome.Ending.BLEW_UP, t, 0, s, evaluations, accepted, rejected);
-        }
-        if (t0 == tEnd || n == 0) {
-            return outcome(IntegrationOutcome.Ending.COMPLETED, tEnd, 0, s, evaluations, accepted, rejected);
-        }
         double[] rtol = s.relativeTolerances(n);
         double[] atol = s.absoluteTolerances(n);
-        double direction = Math.signum(tEnd - t0);
-        double hMax = Math.min(s.maxStep(), Math.abs(tEnd - t0));
+        double direction = b.direction;
         // RODAS starts with 1e-6 unless told otherwise; the controller grows it quickly.
-        double h = direction * Math.min(s.initialStep() > 0 ? s.initialStep() : 1e-6, hMax);
-        double timeScale = Math.max(Math.abs(t0), Math.abs(tEnd));
-        boolean rejectedLast = false, nonFiniteLast = false, needJacobian = true;
+        double h = direction * Math.min(s.initialStep() > 0 ? s.initialStep() : 1e-6, b.hMax);
+        boolean needJacobian = true;
         double hAccepted = h, errAccepted = 1e-2;
-        long attempts = 0;
 
         while (true) {
-            if (attempts >= s.maxSteps()) {
-                return outcome(IntegrationOutcome.Ending.STEP_LIMIT, t, h, s, evaluations, accepted, rejected);
-            }
-            if (s.cancelled().getAsBoolean()) {
-                return outcome(IntegrationOutcome.Ending.CANCELLED, t, h, s, evaluations, accepted, rejected);
-            }
-            if (s.deadlineNanos() != Long.MAX_VALUE && System.nanoTime() - s.deadlineNanos() > 0) {
-                return outcome(IntegrationOutcome.Ending.TIME_LIMIT, t, h, s, evaluations, accepted, rejected);
-            }
-            if (0.1 * Math.abs(h) <= UROUND * Math.max(Math.abs(t), timeScale * 1e-3)) {
-                return outcome(nonFiniteLast ? IntegrationOutcome.Ending.NOT_FINITE
-                        : IntegrationOutcome.Ending.STEP_SIZE_UNDERFLOW, t, h, s, evaluations, accepted, rejected);
+            IntegrationOutcome budget = b.beforeAttempt(t, y, h);
+            if (budget != null) {
+                return budget;
             }
             boolean last = false;
             if ((t + 1.0001 * h - tEnd) * direction >= 0) {
                 h = tEnd - t;
                 last = true;
             }
-            attempts++;
             if (needJacobian) { // once per accepted point: a rejected step retries with the same J and f
                 field.rates(t, y, p, f0);
                 boolean finiteJacobian = evaluateJacobian(t);
-                evaluations++;
-                jacobians++;
+                b.evaluations++;
                 if (!autonomous) {
                     double delta = Math.sqrt(UROUND * Math.max(1e-5, Math.abs(t)));
                     field.rates(t + delta, y, p, ft);
-                    evaluations++;
+                    b.evaluations++;
                     for (int i = 0; i < n; i++) {
                         ft[i] = (ft[i] - f0[i]) / delta;
                     }
                 }
                 if (!Vectors.allFinite(f0) || !finiteJacobian) {
-                    return outcome(IntegrationOutcome.Ending.NOT_FINITE, t, h, s, evaluations, accepted, rejected);
+                    return b.outcome(IntegrationOutcome.Ending.NOT_FINITE, t, y, h);
                 }
                 needJacobian = false;
             }
             double fac = 1 / (h * GAMMA);
             if (!factor(fac)) { // singular: retry with a smaller step
-                rejected++;
-                rejectedLast = true;
+                b.reject();
                 h *= 0.5;
                 continue;
             }
@@ -291,7 +261,7 @@ public final class Rodas4 implements Integrator {
                 k6[i] = fs[i] + (C61 * k1[i] + C62 * k2[i] + C63 * k3[i] + C64 * k4[i] + C65 * k5[i]) / h;
             }
             solve(k6);
-            evaluations += 5;
+            b.evaluations += 5;
             double err = 0;
             for (int i = 0; i < n; i++) {
                 yNew[i] = yStage[i] + k6[i];
@@ -300,20 +270,16 @@ public final class Rodas4 implements Integrator {
                 err += e * e;
             }
             err = Math.sqrt(err / n);
-            if (!Double.isFinite(err) || !Vectors.allFinite(yNew)) {
-                rejected++;
-                rejectedLast = true;
-                nonFiniteLast = true;
+            if (b.rejectedAsNotFinite(!Double.isFinite(err) || !Vectors.allFinite(yNew))) {
                 h *= 0.2;
                 continue;
             }
-            nonFiniteLast = false;
             double ratio = Math.max(1 / RATIO_MAX, Math.min(1 / RATIO_MIN, Math.pow(err, 0.25) / SAFETY));
             double hNew = h / ratio;
             if (err <= 1.0) {
-                accepted++;
+                b.accepted++;
                 // Predictive controller of Gustafsson (1994), as in RODAS: also look at the previous step's error.
-                if (accepted > 1) {
+                if (b.accepted > 1) {
                     double predicted = (hAccepted / h) * Math.pow(err * err / errAccepted, 0.25) / SAFETY;
                     predicted = Math.max(1 / RATIO_MAX, Math.min(1 / RATIO_MIN, predicted));
                     hNew = h / Math.max(ratio, predicted);
@@ -333,58 +299,20 @@ public final class Rodas4 implements Integrator {
                 y = yNew;
                 yNew = swap;
                 needJacobian = true;
-                if (observer != null) {
-                    dense.set(tOld, t, h);
-                    observer.step(dense);
-                    if (observer.stopRequested()) {
-                        return outcome(IntegrationOutcome.Ending.STOPPED, t, h, s, evaluations, accepted, rejected);
-                    }
+                IntegrationOutcome end = b.accept(tOld, t, h, y, last);
+                if (end != null) {
+                    return end;
                 }
-                if (Vectors.normInf(y) > s.blowUpBound()) {
-                    return outcome(IntegrationOutcome.Ending.BLEW_UP, t, h, s, evaluations, accepted, rejected);
-                }
-                if (last) {
-                    return outcome(IntegrationOutcome.Ending.COMPLETED, t, h, s, evaluations, accepted, rejected);
-                }
-                if (Math.abs(hNew) > hMax) {
-                    hNew = direction * hMax;
-                }
-                if (rejectedLast) {
-                    hNew = direction * Math.min(Math.abs(hNew), Math.abs(h));
-                }
-                rejectedLast = false;
+                hNew = b.nextStep(hNew, h);
             } else {
-                rejected++;
-                rejectedLast = true;
+                b.reject();
             }
             h = hNew;
         }
     }
 
-    private IntegrationOutcome outcome(IntegrationOutcome.Ending ending, double t, double h, IntegratorSettings s,
-            long evaluations, long accepted, long rejected) {
-        return new IntegrationOutcome(ending, t, y, evaluations, accepted, rejected, h, s.blowUpBound());
-    }
-
-    private final class Dense implements DenseStep {
-        private double tOld, tNew, h;
-
-        void set(double tOld, double tNew, double h) {
-            this.tOld = tOld;
-            this.tNew = tNew;
-            this.h = h;
-        }
-
-        @Override
-        public double startTime() {
-            return tOld;
-        }
-
-        @Override
-        public double endTime() {
-            return tNew;
-        }
-
+    /** The last accepted step with the 3rd-order continuous extension (q1, q2, yOld set before the swap). */
+    private final class Dense extends AdaptiveStepDriver.View {
         @Override
         public void stateAt(double t, double[] out) {
             double s = (t - tOld) / h;
@@ -392,11 +320,6 @@ public final class Rodas4 implements Integrator {
             for (int i = 0; i < n; i++) {
                 out[i] = yOld[i] * s1 + s * (y[i] + s1 * (q1[i] + s * q2[i]));
             }
-        }
-
-        @Override
-        public double[] endState() {
-            return y;
         }
     }
 }

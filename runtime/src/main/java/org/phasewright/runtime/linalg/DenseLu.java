@@ -8,6 +8,7 @@ public final class DenseLu {
     private final int n;
     private final double[] lu;
     private final int[] pivot;
+    private double determinant;
 
     public DenseLu(int n) {
         this.n = n;
@@ -17,6 +18,7 @@ public final class DenseLu {
 
     /** Factors a copy of {@code m}; false when a pivot is negligible against the largest entry (singular). */
     public boolean factor(double[] m) {
+        determinant = 0;
         System.arraycopy(m, 0, lu, 0, n * n);
         double scale = 0;
         for (int i = 0; i < n * n; i++) {
@@ -28,6 +30,7 @@ public final class DenseLu {
         if (scale == 0) {
             return false;
         }
+        double det = 1;
         for (int k = 0; k < n; k++) {
             int best = k;
             for (int i = k + 1; i < n; i++) {
@@ -37,6 +40,7 @@ public final class DenseLu {
             }
             pivot[k] = best;
             if (best != k) {
+                det = -det;
                 for (int j = 0; j < n; j++) {
                     double tmp = lu[k * n + j];
                     lu[k * n + j] = lu[best * n + j];
@@ -47,6 +51,7 @@ public final class DenseLu {
             if (Math.abs(d) <= 1e-14 * scale) {
                 return false;
             }
+            det *= d;
             for (int i = k + 1; i < n; i++) {
                 double f = lu[i * n + k] / d;
                 lu[i * n + k] = f;
@@ -57,7 +62,13 @@ public final class DenseLu {
                 }
             }
         }
+        determinant = det;
         return true;
+    }
+
+    /** The determinant of the last factored matrix: the signed product of the pivots, 0 when it was singular. */
+    public double determinant() {
+        return determinant;
     }
 
     /** Solves A x = b in place (b becomes x). */

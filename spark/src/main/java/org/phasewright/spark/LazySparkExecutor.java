@@ -73,11 +73,6 @@ public final class LazySparkExecutor implements EnsembleExecutor, AutoCloseable 
         return executor.run(task, model, control);
     }
 
-    /** Whether a context was started (for tests and messages). */
-    public synchronized boolean started() {
-        return context != null;
-    }
-
     @Override
     public synchronized void close() {
         if (context != null) {

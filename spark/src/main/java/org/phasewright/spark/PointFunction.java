@@ -14,15 +14,18 @@ import org.phasewright.runtime.ensemble.PointTask;
  * What a Spark task runs for one point: the model from the recipe (compiled once per executor JVM), then the
  * runtime's own point function, so a row computed here equals the row computed by the local executor.
  *
+ * @param modelKey            the recipe's key, computed once on the driver (hashing the source per point would
+ *                            repeat the same work millions of times)
  * @param deadlineEpochMillis wall-clock deadline shared by every JVM, or Long.MAX_VALUE
  * @param done                counts finished points for the driver's progress
  */
-record PointFunction<R extends Serializable>(ModelRecipe recipe, PointTask<R> task, long deadlineEpochMillis,
+record PointFunction<R extends Serializable>(ModelRecipe recipe, String modelKey, PointTask<R> task,
+        long deadlineEpochMillis,
         LongAccumulator done) implements Function<Integer, R> {
 
     @Override
     public R call(Integer point) {
-        CompiledModel model = RecipeCache.model(recipe);
+        CompiledModel model = RecipeCache.model(modelKey, recipe);
         task.checkModel(model);
         long deadlineNanos = Long.MAX_VALUE;
         if (deadlineEpochMillis != Long.MAX_VALUE) {

@@ -17,6 +17,11 @@ final class RecipeCache {
     }
 
     static CompiledModel model(ModelRecipe recipe) {
-        return MODELS.computeIfAbsent(recipe.key(), key -> recipe.compile());
+        return model(recipe.key(), recipe);
+    }
+
+    /** The model of {@code recipe}, whose key is {@code key}. */
+    static CompiledModel model(String key, ModelRecipe recipe) {
+        return MODELS.computeIfAbsent(key, k -> recipe.compile());
     }
 }

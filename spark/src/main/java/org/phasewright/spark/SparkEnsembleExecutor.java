@@ -33,10 +33,12 @@ public final class SparkEnsembleExecutor implements EnsembleExecutor {
 
     private final JavaSparkContext context;
     private final ModelRecipe recipe;
+    private final String recipeKey;
 
     public SparkEnsembleExecutor(JavaSparkContext context, ModelRecipe recipe) {
         this.context = context;
         this.recipe = recipe;
+        this.recipeKey = recipe.key();
     }
 
     @Override
@@ -58,8 +60,8 @@ public final class SparkEnsembleExecutor implements EnsembleExecutor {
         try {
             done = context.sc().longAccumulator("points done");
             context.setJobGroup(group, "ensemble of " + points + " points", true); // interrupt tasks on cancel
-            future = context.parallelize(indices, slices).map(new PointFunction<>(recipe, task, deadline, done))
-                    .collectAsync();
+            future = context.parallelize(indices, slices)
+                    .map(new PointFunction<>(recipe, recipeKey, task, deadline, done)).collectAsync();
         } catch (RuntimeException e) { // Spark says "stopped SparkContext" with both stack traces in the message
             String why = stuck(System.currentTimeMillis());
             throw new EnsembleFailure(why != null ? why : "the Spark job could not start: " + firstLine(e), e);

@@ -17,12 +17,4 @@ public record Axis(String name, int index, double from, double to, int steps) im
     public double value(int k) {
         return steps == 1 ? from : from + (to - from) * k / (steps - 1);
     }
-
-    public double[] values() {
-        double[] v = new double[steps];
-        for (int k = 0; k < steps; k++) {
-            v[k] = value(k);
-        }
-        return v;
-    }
 }

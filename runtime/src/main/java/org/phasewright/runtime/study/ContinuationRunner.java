@@ -17,8 +17,6 @@ import org.phasewright.runtime.equilibria.EquilibriumFinder;
 import org.phasewright.runtime.equilibria.EquilibriumSearchOutcome;
 import org.phasewright.runtime.equilibria.PolynomialRoots;
 import org.phasewright.runtime.equilibria.StartPoints;
-import org.phasewright.runtime.integrate.DormandPrince54;
-import org.phasewright.runtime.integrate.IntegratorSettings;
 import org.phasewright.runtime.model.EquilibriumContinuation;
 import org.phasewright.runtime.periodic.CycleBranch;
 import org.phasewright.runtime.periodic.CycleFollower;
@@ -68,7 +66,8 @@ final class ContinuationRunner {
         } catch (ModelEvaluationException e) {
             return new ContinuationResult(null, Status.FAILED, "INVALID_INPUT", e.getMessage());
         }
-        StartPoints starts = StartPoints.build(p, initial, shortRun(model, p, initial, settings, budget),
+        StartPoints starts = StartPoints.build(p, initial, EquilibriumSearchRunner.shortRun(model, p, initial,
+                EquilibriumSearchRunner.SHORT_RUN_STEPS, Integer.MAX_VALUE, settings, budget),
                 settings.equilibria());
         Optional<PolynomialRoots.Summary> homotopy = PolynomialRoots.find(model.model(), p, budget.deadlineNanos(),
                 budget.cancelled());
@@ -114,19 +113,5 @@ final class ContinuationRunner {
             out.add(follower.follow(out.size() + 1, s.state(), s.parameter(), s.frequency()));
         }
         return out;
-    }
-
-    /** Accepted steps of a run from the initial values at the start value, to seed Newton. */
-    private static List<double[]> shortRun(CompiledModel model, double[] p, double[] initial, RunSettings settings,
-            Budget budget) {
-        List<double[]> points = new ArrayList<>();
-        IntegratorSettings s = IntegratorSettings.DEFAULT.withMaxSteps(EquilibriumSearchRunner.SHORT_RUN_STEPS)
-                .withTolerances(1e-6, 1e-8)
-                .withBlowUpBound(settings.blowUpBound())
-                .withDeadline(budget.deadlineNanos())
-                .withCancellation(budget.cancelled());
-        new DormandPrince54(model.field(), p).integrate(0.0, initial, 1e9, s,
-                step -> points.add(step.endState().clone()));
-        return points;
     }
 }

@@ -1,5 +1,6 @@
 package org.phasewright.runtime.study;
 
+import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -39,7 +40,8 @@ final class EquilibriumSearchRunner {
         if (model.dimension() > SparseJacobian.DENSE_LIMIT) {
             return large(model, p, trajectory, settings, budget);
         }
-        List<double[]> points = trajectory != null ? rows(trajectory) : shortRun(model, p, settings, budget);
+        List<double[]> points = trajectory != null ? rows(trajectory, Integer.MAX_VALUE)
+                : shortRun(model, p, model.initialState(), SHORT_RUN_STEPS, Integer.MAX_VALUE, settings, budget);
         StartPoints starts = StartPoints.build(p, model.initialState(), points, settings.equilibria());
         // Polynomial rate laws: every isolated root by homotopy; its real roots are tried first.
         Optional<PolynomialRoots.Summary> homotopy = PolynomialRoots.find(model.model(), p, budget.deadlineNanos(),
@@ -68,8 +70,9 @@ final class EquilibriumSearchRunner {
             return new EquilibriumResult(List.of(), null, Status.FAILED, "MODEL_TOO_LARGE", "a model of " + n
                     + " states needs a sparse Jacobian for Newton's method, but its Jacobian has too many nonzeros");
         }
-        List<double[]> points = trajectory != null ? lastRows(trajectory, LARGE_TRAJECTORY_STARTS)
-                : lastPoints(model, p, settings, budget);
+        List<double[]> points = trajectory != null ? rows(trajectory, LARGE_TRAJECTORY_STARTS)
+                : shortRun(model, p, model.initialState(), LARGE_SHORT_RUN_STEPS, LARGE_TRAJECTORY_STARTS,
+                        settings, budget);
         EquilibriumSettings defaults = settings.equilibria();
         EquilibriumSettings few = new EquilibriumSettings(0, LARGE_TRAJECTORY_STARTS,
                 defaults.maxNewtonIterations(), Math.min(defaults.maxTotalIterations(), LARGE_ITERATIONS),
@@ -87,32 +90,6 @@ final class EquilibriumSearchRunner {
                 symmetry(model, search.equilibria()));
     }
 
-    /** The last {@code count} rows of a trajectory. */
-    private static List<double[]> lastRows(Trajectory trajectory, int count) {
-        List<double[]> out = new ArrayList<>();
-        for (int k = Math.max(0, trajectory.size() - count); k < trajectory.size(); k++) {
-            out.add(trajectory.stateRow(k));
-        }
-        return out;
-    }
-
-    /** The last few accepted points of a short run, keeping only those (each costs n doubles). */
-    private static List<double[]> lastPoints(CompiledModel model, double[] p, RunSettings settings, Budget budget) {
-        java.util.ArrayDeque<double[]> last = new java.util.ArrayDeque<>();
-        IntegratorSettings s = IntegratorSettings.DEFAULT.withMaxSteps(LARGE_SHORT_RUN_STEPS)
-                .withTolerances(1e-6, 1e-8)
-                .withBlowUpBound(settings.blowUpBound())
-                .withDeadline(budget.deadlineNanos())
-                .withCancellation(budget.cancelled());
-        new DormandPrince54(model.field(), p).integrate(0.0, model.initialState(), 1e9, s, step -> {
-            if (last.size() == LARGE_TRAJECTORY_STARTS) {
-                last.removeFirst();
-            }
-            last.addLast(step.endState().clone());
-        });
-        return new ArrayList<>(last);
-    }
-
     /** Orbits, isotropy and invariant subspaces under the declared symmetries (empty when there are none). */
     private static SymmetryReport symmetry(CompiledModel model, List<Equilibrium> equilibria) {
         return SymmetryAnalysis.analyse(SymmetryAnalysis.linearMaps(model.model()),
@@ -120,27 +97,35 @@ final class EquilibriumSearchRunner {
                 equilibria.stream().map(Equilibrium::coordinates).toList(), model.stateNames());
     }
 
-    private static List<double[]> rows(Trajectory trajectory) {
-        List<double[]> out = new ArrayList<>(trajectory.size());
-        for (int k = 0; k < trajectory.size(); k++) {
+    /** The last {@code count} rows of a trajectory (all of them when it has no more). */
+    private static List<double[]> rows(Trajectory trajectory, int count) {
+        int first = Math.max(0, trajectory.size() - count);
+        List<double[]> out = new ArrayList<>(trajectory.size() - first);
+        for (int k = first; k < trajectory.size(); k++) {
             out.add(trajectory.stateRow(k));
         }
         return out;
     }
 
     /**
-     * Accepted step points of a run from the initial state with no meaningful end time (the step limit ends it),
-     * so the sample does not depend on guessing the model's time scale.
+     * The last {@code keep} accepted step points of a run from {@code initial} with no meaningful end time (the
+     * step limit ends it), so the sample does not depend on guessing the model's time scale. Only {@code keep}
+     * points are held at a time, since each costs n doubles.
      */
-    private static List<double[]> shortRun(CompiledModel model, double[] p, RunSettings settings, Budget budget) {
-        List<double[]> points = new ArrayList<>();
-        IntegratorSettings s = IntegratorSettings.DEFAULT.withMaxSteps(SHORT_RUN_STEPS)
+    static List<double[]> shortRun(CompiledModel model, double[] p, double[] initial, int maxSteps, int keep,
+            RunSettings settings, Budget budget) {
+        ArrayDeque<double[]> last = new ArrayDeque<>();
+        IntegratorSettings s = IntegratorSettings.DEFAULT.withMaxSteps(maxSteps)
                 .withTolerances(1e-6, 1e-8)
                 .withBlowUpBound(settings.blowUpBound())
                 .withDeadline(budget.deadlineNanos())
                 .withCancellation(budget.cancelled());
-        new DormandPrince54(model.field(), p).integrate(0.0, model.initialState(), 1e9, s,
-                step -> points.add(step.endState().clone()));
-        return points;
+        new DormandPrince54(model.field(), p).integrate(0.0, initial, 1e9, s, step -> {
+            if (last.size() == keep) {
+                last.removeFirst();
+            }
+            last.addLast(step.endState().clone());
+        });
+        return new ArrayList<>(last);
     }
 }

@@ -32,10 +32,7 @@ final class SweepRunner {
         try {
             from = InitialValues.evaluate(request.from(), base, "start value");
             to = InitialValues.evaluate(request.to(), base, "end value");
-            endTime = InitialValues.evaluate(request.endTime(), base, "end time");
-            if (!(endTime > 0)) {
-                throw new ModelEvaluationException("end time must be positive, got " + endTime);
-            }
+            endTime = Ensembles.positive(request.endTime(), base, "end time");
             if (request.steps() < 1 || request.steps() > MAX_STEPS) {
                 throw new ModelEvaluationException("steps must lie in 1 .. " + MAX_STEPS + ", got "
                         + request.steps());
@@ -58,23 +55,17 @@ final class SweepRunner {
             return new SweepResult(null, Status.FAILED, Ensembles.EXECUTOR_FAILED, e.getMessage());
         }
         List<SweepColumn> columns = new ArrayList<>();
-        boolean failed = false;
+        List<String> endings = new ArrayList<>();
         for (OrbitColumn c : run.rows()) {
             if (c != null) {
                 columns.add(c.column());
-                failed |= !c.ending().equals("COMPLETED");
+                endings.add(c.ending());
             }
         }
-        SweepOutcome.Ending ending = run.cancelled() || budget.cancelled().getAsBoolean()
-                ? SweepOutcome.Ending.CANCELLED
-                : columns.size() < request.steps() || budget.expired() ? SweepOutcome.Ending.TIME_LIMIT
-                        : failed ? SweepOutcome.Ending.SOME_FAILED : SweepOutcome.Ending.COMPLETED;
+        String ending = Ensembles.ending(endings, request.steps(), run.cancelled(), budget);
         SweepOutcome outcome = new SweepOutcome(parameters.name(), from, to, endTime, columns, request.steps(),
-                run.workers(), ending);
-        Status status = switch (outcome.ending()) {
-            case COMPLETED -> Status.COMPLETED;
-            case SOME_FAILED, TIME_LIMIT, CANCELLED -> Status.INCOMPLETE;
-        };
+                run.workers(), SweepOutcome.Ending.valueOf(ending));
+        Status status = Ensembles.status(ending);
         String message = outcome.message();
         if (!message.contains(run.executor())) { // e.g. Spark: the threads alone would not say where it ran
             message += " (" + run.executor() + ")";

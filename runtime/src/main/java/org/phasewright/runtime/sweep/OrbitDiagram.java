@@ -2,11 +2,7 @@ package org.phasewright.runtime.sweep;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ForkJoinPool;
-import java.util.concurrent.Future;
 import java.util.function.BooleanSupplier;
-import java.util.function.DoubleConsumer;
 
 import org.phasewright.runtime.compile.CompiledModel;
 import org.phasewright.runtime.compile.VectorField;
@@ -20,59 +16,16 @@ import org.phasewright.runtime.integrate.StepObserver;
 import org.phasewright.runtime.symbolic.InitialValues;
 
 /**
- * Orbit diagram: one integration per parameter value, run in parallel on a pool of its own. A local maximum of
- * state i is a falling zero of its rate f_i, located on the dense output (so its value is accurate to the
- * integration tolerance, not to the step). Generated vector fields are stateless and shared by all threads; the
- * interpreter is not thread-safe, so a model that fell back to it runs on one thread.
+ * Orbit diagram column: one integration per parameter value; the ensemble executors (via
+ * {@link org.phasewright.runtime.ensemble.OrbitPoints}) run the columns in parallel. A local maximum of state i is a
+ * falling zero of its rate f_i, located on the dense output (so its value is accurate to the integration tolerance,
+ * not to the step).
  */
 public final class OrbitDiagram {
     private OrbitDiagram() {
     }
 
-    /**
-     * @param settings tolerances, step limit, blow-up bound, deadline and cancellation of every integration
-     * @param progress hears the fraction of parameter values done, on the calling thread; may be null
-     */
-    public static SweepOutcome run(CompiledModel model, ParameterVector parameters, double from, double to,
-            int steps, double endTime, IntegratorSettings settings, BooleanSupplier cancelled,
-            DoubleConsumer progress) {
-        int threads = model.backend() == CompiledModel.Backend.GENERATED_CODE
-                ? Math.max(1, Math.min(steps, Runtime.getRuntime().availableProcessors())) : 1;
-        ForkJoinPool pool = new ForkJoinPool(threads);
-        List<Future<SweepColumn>> futures = new ArrayList<>();
-        try {
-            for (int k = 0; k < steps; k++) {
-                double value = steps == 1 ? from : from + (to - from) * k / (steps - 1);
-                futures.add(pool.submit(() -> column(model, parameters, value, endTime, settings, cancelled)));
-            }
-            List<SweepColumn> columns = new ArrayList<>();
-            boolean failed = false;
-            int done = 0;
-            for (Future<SweepColumn> f : futures) {
-                SweepColumn c = f.get();
-                if (progress != null) {
-                    progress.accept(++done / (double) steps);
-                }
-                if (c != null) {
-                    columns.add(c);
-                    failed |= !c.ending().equals("COMPLETED");
-                }
-            }
-            SweepOutcome.Ending ending = cancelled.getAsBoolean() ? SweepOutcome.Ending.CANCELLED
-                    : columns.size() < steps || expired(settings) ? SweepOutcome.Ending.TIME_LIMIT
-                            : failed ? SweepOutcome.Ending.SOME_FAILED : SweepOutcome.Ending.COMPLETED;
-            return new SweepOutcome(parameters.name(), from, to, endTime, columns, steps, threads, ending);
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            return new SweepOutcome(parameters.name(), from, to, endTime, List.of(), steps, threads,
-                    SweepOutcome.Ending.CANCELLED);
-        } catch (ExecutionException e) {
-            throw new IllegalStateException("orbit diagram: " + e.getCause(), e.getCause());
-        } finally {
-            pool.shutdownNow();
-        }
-    }
-
+    // column() is public, so it guards its own budget rather than trusting every caller to.
     private static boolean expired(IntegratorSettings s) {
         return s.deadlineNanos() != Long.MAX_VALUE && System.nanoTime() - s.deadlineNanos() > 0;
     }

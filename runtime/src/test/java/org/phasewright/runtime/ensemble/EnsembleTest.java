@@ -20,7 +20,7 @@ import org.phasewright.runtime.continuation.ParameterVector;
 import org.phasewright.runtime.integrate.IntegratorSettings;
 import org.phasewright.runtime.model.DynamicalModel;
 import org.phasewright.runtime.sweep.OrbitDiagram;
-import org.phasewright.runtime.sweep.SweepOutcome;
+import org.phasewright.runtime.sweep.SweepColumn;
 
 class EnsembleTest {
     private static final IntegrationRecipe LYAPUNOV = new IntegrationRecipe(1e-9, 1e-12, 10_000_000L, 1e12);
@@ -31,8 +31,7 @@ class EnsembleTest {
         DynamicalModel m = NormalForms.radial(-1, 0, 0.1);
         CompiledModel cm = ModelCompiler.compile(m);
         IntegratorSettings s = IntegratorSettings.DEFAULT.withTolerances(1e-10, 1e-12);
-        SweepOutcome direct = OrbitDiagram.run(cm, new ParameterVector(m, cm.parameters(), 0), 0.25, 1, 5, 120, s,
-                () -> false, null);
+        ParameterVector mu = new ParameterVector(m, cm.parameters(), 0);
         EnsembleRun<OrbitColumn> run = new LocalEnsembleExecutor(3).run(OrbitPoints.of(cm, new Axis("mu", 0, 0.25,
                 1, 5), 120, new IntegrationRecipe(1e-10, 1e-12, s.maxSteps(), s.blowUpBound())), cm,
                 EnsembleControl.NONE);
@@ -40,8 +39,9 @@ class EnsembleTest {
         for (int k = 0; k < 5; k++) {
             OrbitColumn c = run.rows().get(k);
             // bit for bit: the same function on the same inputs (common practice for a refactoring)
-            assertEquals(direct.columns().get(k).parameter(), c.parameter(), 0.0);
-            assertArrayEquals(direct.columns().get(k).maxima(0), c.maxima()[0], 0.0);
+            SweepColumn direct = OrbitDiagram.column(cm, mu, 0.25 + (1 - 0.25) * k / (5 - 1), 120, s, () -> false);
+            assertEquals(direct.parameter(), c.parameter(), 0.0);
+            assertArrayEquals(direct.maxima(0), c.maxima()[0], 0.0);
             // Strogatz, Nonlinear Dynamics and Chaos, §8.2: the stable cycle of r' = μr − r³ has r = √μ
             for (double v : c.maxima()[0]) {
                 assertEquals(Math.sqrt(c.parameter()), v, 1e-6);

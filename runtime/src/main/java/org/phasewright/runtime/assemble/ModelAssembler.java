@@ -144,7 +144,7 @@ public final class ModelAssembler {
 
     /** The range of a one-element family made for a scalar whose formula has sums or family elements. */
     private static IndexRange single(String scalarName) {
-        return new IndexRange("_" + scalarName, 0, 0, false);
+        return new IndexRange(Family.SCALAR_RANGE_PREFIX + scalarName, 0, 0, false);
     }
 
     public void familyRate(Family family, Expr law) {
@@ -212,7 +212,7 @@ public final class ModelAssembler {
             }
             Family withLaw = new Family(f.kind(), f.name(), f.range(), f.offset(), law);
             finalFamilies.add(withLaw);
-            if (f.size() == 1 && f.range().name().startsWith("_")) {
+            if (f.scalar()) {
                 rates.addGenerated(1, k -> IndexExpansion.expand(law, Map.of()));
             } else {
                 rates.addGenerated(f.size(), k -> expandAt(law, f.range(), k));

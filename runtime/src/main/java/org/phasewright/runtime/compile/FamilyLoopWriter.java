@@ -71,7 +71,7 @@ final class FamilyLoopWriter implements JavaExpressionWriter.Indexed {
         levels.add(top);
         IndexRange r = family.range();
         String loops;
-        if (family.size() == 1 && r.name().startsWith("_")) { // a scalar with sums: no index of its own
+        if (family.scalar()) { // a scalar with sums: no index of its own
             loops = top.indent() + target + "[" + family.offset() + "] = " + writer.write(family.formula(), this)
                     + ";\n";
         } else {

@@ -1,5 +1,7 @@
 package org.phasewright.runtime.compile;
 
+import java.util.Set;
+
 import org.phasewright.runtime.model.Binary;
 import org.phasewright.runtime.model.Constant;
 import org.phasewright.runtime.model.Element;
@@ -15,39 +17,19 @@ record IndexStencil(long a, long b, IndexRange range, int offset) {
         if (!(ref instanceof Element el) || blockRange == null) {
             return null;
         }
-        long[] ab = linear(el.index(), blockRange.name());
-        return ab == null ? null : new IndexStencil(ab[0], ab[1], el.range(), el.offset());
+        // a·i + b in the block's own index only (a = 0 for a constant); other indices (a sum's) are not stencils
+        LinearIndex linear = LinearIndex.of(el.index());
+        String name = blockRange.name();
+        if (linear == null || !Set.of(name).containsAll(linear.coefficients().keySet())) {
+            return null;
+        }
+        return new IndexStencil(linear.coefficients().getOrDefault(name, 0L), linear.constant(), el.range(),
+                el.offset());
     }
 
     int column(long value) {
         int position = range.position(a * value + b);
         return position < 0 ? -1 : offset + position;
-    }
-
-    /** {a, b} when e = a·i + b with integer a, b; null for anything else (products of indices, ...). */
-    private static long[] linear(Expr e, String name) {
-        return switch (e) {
-            case Constant c -> new long[] {0, (long) c.value()};
-            case IndexValue i -> i.name().equals(name) ? new long[] {1, 0} : null;
-            case Negation n -> {
-                long[] x = linear(n.operand(), name);
-                yield x == null ? null : new long[] {-x[0], -x[1]};
-            }
-            case Binary bin -> {
-                long[] l = linear(bin.left(), name), r = linear(bin.right(), name);
-                if (l == null || r == null) {
-                    yield null;
-                }
-                yield switch (bin.operator()) {
-                    case ADD -> new long[] {l[0] + r[0], l[1] + r[1]};
-                    case SUBTRACT -> new long[] {l[0] - r[0], l[1] - r[1]};
-                    case MULTIPLY -> l[0] != 0 && r[0] != 0 ? null
-                            : new long[] {l[0] * r[1] + r[0] * l[1], l[1] * r[1]};
-                    default -> null;
-                };
-            }
-            default -> null;
-        };
     }
 
     /**

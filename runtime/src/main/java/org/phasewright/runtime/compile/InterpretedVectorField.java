@@ -55,9 +55,7 @@ public final class InterpretedVectorField implements VectorField, DerivedValues 
     @Override
     public void jacobian(double t, double[] u, double[] p, double[] jac) {
         if (jacobian == null) {
-            if (model.dimension() > ModelCompiler.DENSE_JACOBIAN_LIMIT) {
-                throw new UnsupportedOperationException("no dense Jacobian for " + model.dimension() + " states");
-            }
+            ModelCompiler.requireDenseJacobian(model);
             jacobian = SymbolicJacobian.of(model);
             auxiliary = jacobian.auxiliary();
             scratch = new double[model.derived().size() + auxiliary.size()];

@@ -28,7 +28,7 @@ final class LawInliner {
         this.model = model;
         for (Family f : model.families(VariableKind.DERIVED)) {
             derivedFamilies.put(f.name(), f);
-            if (f.size() == 1 && f.range().name().startsWith("_")) {
+            if (f.scalar()) {
                 scalarFamilies.put(f.offset(), f);
             }
         }
@@ -75,18 +75,10 @@ final class LawInliner {
         };
     }
 
-    /** True when the index expression is the range's own index at every value of the range (as in d[i + 0]). */
+    /** True when the index expression is the range's own index (as in d[i + 0]): linear, i with coefficient 1. */
     private static boolean identity(Expr index, IndexRange range) {
-        try {
-            for (int k = 0; k < range.size(); k++) {
-                if (IndexStencil.indexValue(index, range.name(), range.valueAt(k)) != range.valueAt(k)) {
-                    return false;
-                }
-            }
-            return true;
-        } catch (IllegalArgumentException e) {
-            return false;
-        }
+        LinearIndex linear = LinearIndex.of(index);
+        return linear != null && linear.constant() == 0 && linear.coefficients().equals(Map.of(range.name(), 1L));
     }
 
     /** {@code e} with the index {@code name} replaced by the index expression {@code by}. */

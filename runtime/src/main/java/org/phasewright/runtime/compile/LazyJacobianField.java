@@ -45,20 +45,13 @@ final class LazyJacobianField extends ForwardingVectorField implements DerivedVa
 
     /** Generated code with the symbolic Jacobian, or the (synchronised) interpreter if that does not compile. */
     private VectorField build() {
-        if (model.dimension() > ModelCompiler.DENSE_JACOBIAN_LIMIT) {
-            throw new UnsupportedOperationException("no dense Jacobian for " + model.dimension() + " states");
-        }
+        ModelCompiler.requireDenseJacobian(model);
         SymbolicJacobian jacobian = SymbolicJacobian.of(model);
         try {
             return (VectorField) ModelCompiler.load(new JavaSourceGenerator(model, jacobian).generate());
         } catch (Exception | LinkageError | StackOverflowError e) {
             InterpretedVectorField interpreter = new InterpretedVectorField(model, jacobian);
-            return new ForwardingVectorField(interpreter) {
-                @Override
-                public synchronized void rates(double t, double[] u, double[] p, double[] dudt) {
-                    super.rates(t, u, p, dudt);
-                }
-
+            return new ForwardingVectorField(interpreter) { // only jacobian() is called on the dense field
                 @Override
                 public synchronized void jacobian(double t, double[] u, double[] p, double[] jacRowMajor) {
                     super.jacobian(t, u, p, jacRowMajor);

@@ -81,20 +81,8 @@ final class LoopedSourceGenerator {
         int nd = model.derived().size();
         int scratchSize = nd + (jacobian == null ? 0 : jacobian.auxiliary().size());
 
-        Chunks derived = new Chunks(layout.derived().size());
-        for (int u = 0; u < layout.derived().size(); u++) {
-            ModelLayout.Unit unit = layout.derived().get(u);
-            derived.add(u, unit.loop() ? loops.family(unit.family(), "dv", INDENT)
-                    : statement("dv[" + unit.index() + "]", unit.formula(), unit.name()), unit.loop());
-        }
-        derived.flush();
-        Chunks rates = new Chunks(layout.rates().size());
-        for (int u = 0; u < layout.rates().size(); u++) {
-            ModelLayout.Unit unit = layout.rates().get(u);
-            rates.add(u, unit.loop() ? loops.family(unit.family(), "out", INDENT)
-                    : statement("out[" + unit.index() + "]", unit.formula(), unit.name()), unit.loop());
-        }
-        rates.flush();
+        Chunks derived = chunks(layout.derived(), "dv");
+        Chunks rates = chunks(layout.rates(), "out");
 
         StringBuilder body = new StringBuilder();
         body.append("    public int dimension() { return ").append(n).append("; }\n\n");
@@ -146,6 +134,18 @@ final class LoopedSourceGenerator {
                 + "; identifiers are indices only.\n"
                 + "public final class " + JavaSourceGenerator.CLASS_NAME + " implements "
                 + VectorField.class.getName() + ", " + DerivedValues.class.getName() + " {\n" + body + "}\n";
+    }
+
+    /** The units cut into methods; each writes its values into the array named {@code target}. */
+    private Chunks chunks(List<ModelLayout.Unit> units, String target) {
+        Chunks chunks = new Chunks(units.size());
+        for (int u = 0; u < units.size(); u++) {
+            ModelLayout.Unit unit = units.get(u);
+            chunks.add(u, unit.loop() ? loops.family(unit.family(), target, INDENT)
+                    : statement(target + "[" + unit.index() + "]", unit.formula(), unit.name()), unit.loop());
+        }
+        chunks.flush();
+        return chunks;
     }
 
     /** Auxiliary derivatives into dv[nd + m], then the non-zero entries. */

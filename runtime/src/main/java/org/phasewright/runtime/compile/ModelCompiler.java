@@ -27,6 +27,13 @@ public final class ModelCompiler {
      */
     public static final int INDEXED_DENSE_JACOBIAN_LIMIT = 32;
 
+    /** Throws the UnsupportedOperationException of {@link #DENSE_JACOBIAN_LIMIT} for a model above it. */
+    static void requireDenseJacobian(DynamicalModel model) {
+        if (model.dimension() > DENSE_JACOBIAN_LIMIT) {
+            throw new UnsupportedOperationException("no dense Jacobian for " + model.dimension() + " states");
+        }
+    }
+
     private ModelCompiler() {
     }
 
@@ -75,11 +82,15 @@ public final class ModelCompiler {
     }
 
     static Object load(String source) throws CompileException, ReflectiveOperationException {
+        return load(source, JavaSourceGenerator.PACKAGE + "." + JavaSourceGenerator.CLASS_NAME);
+    }
+
+    /** Compiles generated source with Janino and instantiates {@code className} (no-argument constructor). */
+    static Object load(String source, String className) throws CompileException, ReflectiveOperationException {
         SimpleCompiler compiler = new SimpleCompiler();
         compiler.setParentClassLoader(VectorField.class.getClassLoader());
         compiler.cook(source);
-        Class<?> type = compiler.getClassLoader()
-                .loadClass(JavaSourceGenerator.PACKAGE + "." + JavaSourceGenerator.CLASS_NAME);
+        Class<?> type = compiler.getClassLoader().loadClass(className);
         return type.getDeclaredConstructor().newInstance();
     }
 

@@ -29,13 +29,9 @@ final class ModelLayout {
             return family != null;
         }
 
-        int size() {
-            return family == null ? 1 : family.size();
-        }
-
         /** A one-element family made for a scalar whose formula has sums or elements (no loop variable). */
         boolean single() {
-            return family != null && family.size() == 1 && family.range().name().startsWith("_");
+            return family != null && family.scalar();
         }
     }
 

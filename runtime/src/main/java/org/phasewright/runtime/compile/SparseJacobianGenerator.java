@@ -6,7 +6,6 @@ import java.util.List;
 import java.util.Map;
 
 import org.codehaus.commons.compiler.CompileException;
-import org.codehaus.janino.SimpleCompiler;
 import org.phasewright.runtime.model.Binary;
 import org.phasewright.runtime.model.BinaryOperator;
 import org.phasewright.runtime.model.Call;
@@ -284,7 +283,7 @@ final class SparseJacobianGenerator {
 
         private void write(Expr e, StringBuilder out) {
             switch (e) {
-                case Constant c -> out.append(literal(c.value()));
+                case Constant c -> out.append(JavaExpressionWriter.literal(c.value()));
                 case Variable v -> {
                     switch (v.kind()) {
                         case STATE -> {
@@ -358,25 +357,10 @@ final class SparseJacobianGenerator {
             }
             return name;
         }
-
-        private static String literal(double v) {
-            if (Double.isNaN(v)) {
-                return "Double.NaN";
-            }
-            if (Double.isInfinite(v)) {
-                return v > 0 ? "Double.POSITIVE_INFINITY" : "Double.NEGATIVE_INFINITY";
-            }
-            String s = Double.toString(v);
-            return v < 0 || (v == 0 && 1 / v < 0) ? "(" + s + ")" : s;
-        }
     }
 
     /** Compiles the source; the kernel is stateless, hence thread-safe. */
     static SparseJacobianKernel compile(String source) throws CompileException, ReflectiveOperationException {
-        SimpleCompiler compiler = new SimpleCompiler();
-        compiler.setParentClassLoader(SparseJacobianKernel.class.getClassLoader());
-        compiler.cook(source);
-        Class<?> type = compiler.getClassLoader().loadClass(PACKAGE + "." + CLASS_NAME);
-        return (SparseJacobianKernel) type.getDeclaredConstructor().newInstance();
+        return (SparseJacobianKernel) ModelCompiler.load(source, PACKAGE + "." + CLASS_NAME);
     }
 }

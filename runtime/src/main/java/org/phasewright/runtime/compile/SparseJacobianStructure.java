@@ -50,7 +50,7 @@ final class SparseJacobianStructure {
      * per outside reference, then per sum one per term and body reference ({@link #sumOffset}); each holds the
      * slot of the pattern that reference's derivative goes to, or -1 where it reads a zero outside a bounded range.
      */
-    record Block(String name, int rowOffset, int rows, IndexRange range, Expr law, List<Expr> stateRefs,
+    record Block(int rowOffset, int rows, IndexRange range, Expr law, List<Expr> stateRefs,
             List<Element> parameterRefs, List<SumTerm> sums, long slotBase) {
         long perRow() {
             return sumOffset(sums.size());
@@ -143,7 +143,7 @@ final class SparseJacobianStructure {
         if (states.size() > MAX_REFERENCES) {
             throw new NotReducible("law of " + name + " has " + states.size() + " state references");
         }
-        return new Block(name, offset, rows, range, law, List.copyOf(states.keySet()),
+        return new Block(offset, rows, range, law, List.copyOf(states.keySet()),
                 List.copyOf(parameters.keySet()), List.copyOf(sums.values()), slotBase);
     }
 

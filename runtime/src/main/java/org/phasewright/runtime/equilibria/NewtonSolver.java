@@ -5,6 +5,7 @@ import org.phasewright.runtime.compile.VectorField;
 import org.phasewright.runtime.linalg.DenseLu;
 import org.phasewright.runtime.linalg.SparseLu;
 import org.phasewright.runtime.linalg.SparseMatrix;
+import org.phasewright.runtime.linalg.Vectors;
 
 /**
  * Damped Newton iteration for f(x) = 0 with the exact Jacobian. Each step is halved until ||f||_2 decreases enough
@@ -189,14 +190,14 @@ final class NewtonSolver {
                 delta[i] = -f[i];
             }
             sparseLu.solve(delta);
-            return allFinite(delta);
+            return Vectors.allFinite(delta);
         }
         if (lu.factor(jac)) {
             for (int i = 0; i < n; i++) {
                 delta[i] = -f[i];
             }
             lu.solve(delta);
-            return allFinite(delta);
+            return Vectors.allFinite(delta);
         }
         double trace = 0;
         for (int i = 0; i < n; i++) {
@@ -225,12 +226,12 @@ final class NewtonSolver {
             return false;
         }
         lu.solve(delta);
-        return allFinite(delta);
+        return Vectors.allFinite(delta);
     }
 
     /** Residual small against what a relative perturbation of x would produce, and the last step small. */
     private boolean converged(double step) {
-        residual = normInf(f);
+        residual = Vectors.normInf(f);
         double jNorm = 0;
         if (sparse != null) {
             for (int i = 0; i < n; i++) {
@@ -261,7 +262,7 @@ final class NewtonSolver {
         }
         if (changed) {
             field.rates(0.0, xTrial, p, fTrial);
-            double r = normInf(fTrial);
+            double r = Vectors.normInf(fTrial);
             if (r <= residual || r <= Double.MIN_NORMAL) {
                 System.arraycopy(xTrial, 0, x, 0, n);
                 System.arraycopy(fTrial, 0, f, 0, n);
@@ -288,20 +289,4 @@ final class NewtonSolver {
         return Math.sqrt(s);
     }
 
-    private static double normInf(double[] v) {
-        double m = 0;
-        for (double a : v) {
-            m = Math.max(m, Math.abs(a));
-        }
-        return m;
-    }
-
-    private static boolean allFinite(double[] v) {
-        for (double a : v) {
-            if (!Double.isFinite(a)) {
-                return false;
-            }
-        }
-        return true;
-    }
 }

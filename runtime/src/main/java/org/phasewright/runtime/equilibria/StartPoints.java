@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.SplittableRandom;
 
 import org.apache.commons.math3.random.SobolSequenceGenerator;
+import org.phasewright.runtime.linalg.Vectors;
 
 /**
  * Where Newton's method starts, and the per-coordinate scales used to judge convergence and sameness.
@@ -61,7 +62,7 @@ public final class StartPoints {
         double[] globalHalf = new double[n];
         java.util.Arrays.fill(globalHalf, 2 * magnitude);
 
-        List<double[]> finite = trajectory.stream().filter(StartPoints::allFinite).toList();
+        List<double[]> finite = trajectory.stream().filter(Vectors::allFinite).toList();
         // Quantiles rather than min/max: a trajectory that blows up ends with a huge point that would otherwise
         // inflate the box and, worse, the scales that decide convergence and sameness.
         double[] lo = initialState.clone();
@@ -150,14 +151,5 @@ public final class StartPoints {
             x[i] = centre[i] + half[i] * (2 * unit[i] - 1);
         }
         return x;
-    }
-
-    private static boolean allFinite(double[] v) {
-        for (double a : v) {
-            if (!Double.isFinite(a)) {
-                return false;
-            }
-        }
-        return true;
     }
 }

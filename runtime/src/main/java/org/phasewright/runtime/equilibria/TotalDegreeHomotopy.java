@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.function.BooleanSupplier;
 
+import org.phasewright.runtime.linalg.Vectors;
+
 /**
  * All isolated complex roots of a square polynomial system f(x) = 0 by total-degree homotopy continuation
  * (Sommese &amp; Wampler, The Numerical Solution of Systems of Polynomials, 2005, Ch. 8): the start system
@@ -223,7 +225,7 @@ final class TotalDegreeHomotopy {
             out[i] = -hs[i];
         }
         lu.solve(out);
-        return allFinite(out);
+        return Vectors.allFinite(out);
     }
 
     /** Newton iterations on H(·, s); true when the last step is below tol·(1 + |x|). */
@@ -343,15 +345,6 @@ final class TotalDegreeHomotopy {
             m = Math.max(m, Math.hypot(x[2 * i], x[2 * i + 1]));
         }
         return m;
-    }
-
-    private static boolean allFinite(double[] v) {
-        for (double d : v) {
-            if (!Double.isFinite(d)) {
-                return false;
-            }
-        }
-        return true;
     }
 
     /** Complex LU with partial pivoting (row-major, interleaved re/im). */

@@ -72,15 +72,6 @@ public final class SparseMatrix {
         }
     }
 
-    /** Sum of the diagonal entries. */
-    public double trace() {
-        double s = 0;
-        for (int i = 0; i < pattern.dimension(); i++) {
-            s += get(i, i);
-        }
-        return s;
-    }
-
     /** max_i Σ_j |a_ij| w_j: the ∞-norm of A·diag(w); w = null means all ones. */
     public double weightedRowNorm(double[] w) {
         double worst = 0;

@@ -14,8 +14,19 @@ public record Family(VariableKind kind, String name, IndexRange range, int offse
         }
     }
 
+    /**
+     * Prefix of the range name of a one-element family made (by the assembler) for a scalar whose formula has sums
+     * or family elements; compilers recognise such families by it and emit no loop for them.
+     */
+    public static final String SCALAR_RANGE_PREFIX = "_";
+
     public int size() {
         return range.size();
+    }
+
+    /** Whether this is a one-element family standing for a scalar (no index of its own, see SCALAR_RANGE_PREFIX). */
+    public boolean scalar() {
+        return size() == 1 && range.name().startsWith(SCALAR_RANGE_PREFIX);
     }
 
     public boolean contains(int flatIndex) {

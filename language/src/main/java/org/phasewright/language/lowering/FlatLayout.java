@@ -1,6 +1,5 @@
 package org.phasewright.language.lowering;
 
-import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -25,9 +24,6 @@ import org.phasewright.runtime.model.VariableKind;
 public final class FlatLayout {
     /** A declaration's place: first flat position and kind; {@code range} is null for a scalar. */
     public record Place(VariableKind kind, int offset, IndexRange range) {
-        public int size() {
-            return range == null ? 1 : range.size();
-        }
     }
 
     private final Map<IndexDecl, IndexRange> ranges = new HashMap<>();
@@ -53,7 +49,12 @@ public final class FlatLayout {
 
     /** Throws {@link LoweringException} when an index range cannot be evaluated or lets form a cycle. */
     public static FlatLayout of(PhaseModel model) {
-        return new FlatLayout(model, ConstantValues.of(model));
+        return of(model, ConstantValues.of(model));
+    }
+
+    /** As {@link #of(PhaseModel)}, with the model's constants already evaluated by the caller. */
+    public static FlatLayout of(PhaseModel model, ConstantValues constants) {
+        return new FlatLayout(model, constants);
     }
 
     private int place(List<? extends Symbol> declarations, VariableKind kind) {
@@ -104,9 +105,5 @@ public final class FlatLayout {
             }
         }
         return found;
-    }
-
-    public List<StateDecl> states() {
-        return new ArrayList<>(states);
     }
 }

@@ -1,6 +1,7 @@
 package org.phasewright.language.lowering;
 
 import java.util.OptionalDouble;
+import java.util.OptionalLong;
 
 import org.phasewright.language.phase.IndexDecl;
 import org.phasewright.runtime.model.IndexRange;
@@ -26,18 +27,28 @@ public final class IndexRanges {
         return value;
     }
 
-    /** The range of {@code index}; throws {@link LoweringException} for bounds the validator rejects. */
-    public static IndexRange of(IndexDecl index, ConstantValues constants) {
+    /**
+     * The number of values, upper - lower + 1 (zero or less when the range is empty), or empty when a bound is not
+     * a constant integer.
+     */
+    public static OptionalLong size(IndexDecl index, ConstantValues constants) {
         OptionalDouble lower = bound(index.getLower(), constants);
         OptionalDouble upper = bound(index.getUpper(), constants);
-        if (lower.isEmpty() || upper.isEmpty()) {
+        return lower.isEmpty() || upper.isEmpty() ? OptionalLong.empty()
+                : OptionalLong.of((long) upper.getAsDouble() - (long) lower.getAsDouble() + 1);
+    }
+
+    /** The range of {@code index}; throws {@link LoweringException} for bounds the validator rejects. */
+    public static IndexRange of(IndexDecl index, ConstantValues constants) {
+        OptionalLong values = size(index, constants);
+        if (values.isEmpty()) {
             throw new LoweringException("the bounds of index " + index.getName() + " are not integer constants");
         }
-        long size = (long) upper.getAsDouble() - (long) lower.getAsDouble() + 1;
+        long size = values.getAsLong();
         if (size < 1 || size > MAX_SIZE) {
             throw new LoweringException("index " + index.getName() + " has " + size + " values");
         }
-        return new IndexRange(index.getName(), (int) lower.getAsDouble(), (int) upper.getAsDouble(),
-                index.isCyclic());
+        int lower = (int) bound(index.getLower(), constants).getAsDouble();
+        return new IndexRange(index.getName(), lower, (int) (lower + size - 1), index.isCyclic());
     }
 }

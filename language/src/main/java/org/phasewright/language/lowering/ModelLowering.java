@@ -65,17 +65,28 @@ import org.phasewright.runtime.symbolic.IndexExpansion;
 public final class ModelLowering {
 
     public DynamicalModel lower(PhaseModel model) {
+        ConstantValues constants;
+        FlatLayout layout;
         try {
-            return assemble(model);
+            constants = ConstantValues.of(model);
+            layout = FlatLayout.of(model, constants);
+        } catch (IllegalArgumentException | IndexOutOfBoundsException | NullPointerException broken) {
+            throw new LoweringException("the model cannot be lowered: " + broken.getMessage());
+        }
+        return lower(model, constants, layout);
+    }
+
+    /** As {@link #lower(PhaseModel)}, with the constants and layout the caller already built from {@code model}. */
+    public DynamicalModel lower(PhaseModel model, ConstantValues constants, FlatLayout layout) {
+        try {
+            return assemble(model, constants, layout);
         } catch (IllegalArgumentException | IndexOutOfBoundsException | NullPointerException broken) {
             // Only a model with validation errors gets here (the assembler refuses what the validator rejects).
             throw new LoweringException("the model cannot be lowered: " + broken.getMessage());
         }
     }
 
-    private DynamicalModel assemble(PhaseModel model) {
-        FlatLayout layout = FlatLayout.of(model);
-        ConstantValues constants = ConstantValues.of(model);
+    private DynamicalModel assemble(PhaseModel model, ConstantValues constants, FlatLayout layout) {
         Map<Symbol, Variable> variables = new HashMap<>();
         Map<Symbol, Family> families = new HashMap<>();
         List<StateDecl> stateDecls = PhaseModels.states(model);
@@ -103,16 +114,15 @@ public final class ModelLowering {
                 constants::evaluate);
 
         ModelAssembler assembler = new ModelAssembler(model.getName(), model.getTitle(), time);
-        Map<Symbol, Family> declaredFamilies = new HashMap<>();
         for (StateDecl state : stateDecls) {
             String unit = unitText(state.getUnit());
             if (state.getIndex() == null) {
                 same(variables.get(state), assembler.state(state.getName(), expressions.lower(state.getInitial()), unit,
                         state.getDescription()));
             } else {
-                declaredFamilies.put(state, same(families.get(state), assembler.stateFamily(state.getName(),
+                same(families.get(state), assembler.stateFamily(state.getName(),
                         layout.range(state.getIndex()), expressions.lower(state.getInitial()), unit,
-                        state.getDescription())));
+                        state.getDescription()));
             }
         }
         for (ParamDecl param : paramDecls) {
@@ -128,12 +138,9 @@ public final class ModelLowering {
                 for (Expression value : param.getValues()) {
                     values.add(expressions.lower(value));
                 }
-                IndexRange range = layout.range(param.getIndex());
-                if (values.size() != range.size()) {
-                    throw new LoweringException("table " + param.getName() + " lists " + values.size() + " values");
-                }
-                same(families.get(param), assembler.parameterTable(param.getName(), range, values, unit,
-                        param.getDescription()));
+                // A wrong count is reported by IndexChecks; parameterTable refuses it too (a LoweringException here).
+                same(families.get(param), assembler.parameterTable(param.getName(), layout.range(param.getIndex()),
+                        values, unit, param.getDescription()));
             } else {
                 same(families.get(param), assembler.parameterFamily(param.getName(), layout.range(param.getIndex()),
                         expressions.lower(param.getValue()), unit, param.getDescription()));
@@ -149,7 +156,7 @@ public final class ModelLowering {
                         expressions.lower(let.getDefinition()), unit));
             }
         }
-        rates(model, assembler, variables, declaredFamilies, expressions);
+        rates(model, assembler, variables, families, expressions);
         return assembler.build(symmetries(model, assembler, layout, expressions), studies(model, layout, expressions));
     }
 
@@ -302,7 +309,7 @@ public final class ModelLowering {
         Section.Crossing direction = request.isRising() ? Section.Crossing.RISING
                 : request.isFalling() ? Section.Crossing.FALLING : Section.Crossing.BOTH;
         return new Section(surface, direction, expressions.lowerScalar(request.getEnd()),
-                request.getTolerance() == null ? null : expressions.lowerScalar(request.getTolerance()),
+                optional(request.getTolerance(), expressions),
                 method(request.getMethod()));
     }
 

@@ -17,7 +17,6 @@ import org.phasewright.language.phase.IndexDecl;
 import org.phasewright.language.phase.Negation;
 import org.phasewright.language.phase.NumberLiteral;
 import org.phasewright.language.phase.ParamDecl;
-import org.phasewright.language.phase.PhaseModel;
 import org.phasewright.language.phase.RateDecl;
 import org.phasewright.language.phase.StateDecl;
 import org.phasewright.language.phase.StateMap;
@@ -50,7 +49,7 @@ public class IndexChecks extends PhaseCheckBase {
         if (lower.isEmpty() || upper.isEmpty()) {
             return;
         }
-        long size = (long) upper.getAsDouble() - (long) lower.getAsDouble() + 1;
+        long size = IndexRanges.size(index, constants).getAsLong();
         if (size < 1) {
             error("Index '" + index.getName() + "' runs from " + (long) lower.getAsDouble() + " to "
                     + (long) upper.getAsDouble() + " and has no values; the upper bound must be at least the lower.",
@@ -251,7 +250,7 @@ public class IndexChecks extends PhaseCheckBase {
         if (lower.isEmpty() || upper.isEmpty()) {
             return;
         }
-        long size = (long) upper.getAsDouble() - (long) lower.getAsDouble() + 1;
+        long size = IndexRanges.size(index, constants).getAsLong();
         int listed = param.getValues().size();
         if (size >= 1 && listed != size) {
             error("Table '" + param.getName() + "' lists " + ExpressionChecks.plural(listed, "value") + " but index "
@@ -259,11 +258,6 @@ public class IndexChecks extends PhaseCheckBase {
                     + (long) upper.getAsDouble() + "); give exactly one value per index value.", param,
                     PHASE.getParamDecl_Listed(), IssueCodes.TABLE_SIZE_MISMATCH);
         }
-    }
-
-    private ConstantValues constants(EObject inside) {
-        PhaseModel model = EcoreUtil2.getContainerOfType(inside, PhaseModel.class);
-        return (ConstantValues) getContext().computeIfAbsent(ConstantValues.class, key -> ConstantValues.of(model));
     }
 
     private static String capitalised(String text) {

@@ -1,6 +1,5 @@
 package org.phasewright.language.validation;
 
-import java.util.OptionalDouble;
 import java.util.OptionalLong;
 
 import org.eclipse.emf.ecore.EObject;
@@ -38,7 +37,7 @@ public class StudyChecks extends PhaseCheckBase {
                     simulate, PHASE.getSimulateRequest_TimeName(), IssueCodes.WRONG_TIME_NAME, time);
         }
         int given = simulate.getStart().size();
-        OptionalLong dimension = given == 0 ? OptionalLong.empty() : dimension(model);
+        OptionalLong dimension = given == 0 ? OptionalLong.empty() : dimension(model, constants(simulate));
         if (dimension.isPresent() && given != dimension.getAsLong()) {
             int states = (int) dimension.getAsLong();
             error("The start point has " + ExpressionChecks.plural(given, "value") + " but the model has "
@@ -63,7 +62,8 @@ public class StudyChecks extends PhaseCheckBase {
         if (!lyapunov.isHasLeading()) {
             return;
         }
-        OptionalLong dimension = dimension(EcoreUtil2.getContainerOfType(lyapunov, PhaseModel.class));
+        OptionalLong dimension = dimension(EcoreUtil2.getContainerOfType(lyapunov, PhaseModel.class),
+                constants(lyapunov));
         int leading = lyapunov.getLeading();
         if (leading < 1 || (dimension.isPresent() && leading > dimension.getAsLong())) {
             error("`leading K` asks for the K largest exponents: K must lie between 1 and the number of states"
@@ -113,8 +113,7 @@ public class StudyChecks extends PhaseCheckBase {
     }
 
     /** The number of flat states (families count their elements), when every index range is known. */
-    static OptionalLong dimension(PhaseModel model) {
-        ConstantValues constants = ConstantValues.of(model);
+    static OptionalLong dimension(PhaseModel model, ConstantValues constants) {
         long total = 0;
         for (StateDecl state : PhaseModels.states(model)) {
             IndexDecl index = state.getIndex();
@@ -125,12 +124,11 @@ public class StudyChecks extends PhaseCheckBase {
             if (index.eIsProxy()) {
                 return OptionalLong.empty();
             }
-            OptionalDouble lower = IndexRanges.bound(index.getLower(), constants);
-            OptionalDouble upper = IndexRanges.bound(index.getUpper(), constants);
-            if (lower.isEmpty() || upper.isEmpty() || upper.getAsDouble() < lower.getAsDouble()) {
+            OptionalLong size = IndexRanges.size(index, constants);
+            if (size.isEmpty() || size.getAsLong() < 1) {
                 return OptionalLong.empty();
             }
-            total += (long) upper.getAsDouble() - (long) lower.getAsDouble() + 1;
+            total += size.getAsLong();
         }
         return OptionalLong.of(total);
     }

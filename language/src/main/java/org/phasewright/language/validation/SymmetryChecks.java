@@ -6,7 +6,6 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.OptionalDouble;
 import java.util.OptionalLong;
 import java.util.Set;
 
@@ -162,21 +161,27 @@ public class SymmetryChecks extends PhaseCheckBase {
     }
 
     private Prepared prepared(PhaseModel phase) {
+        // get/put: prepare reads the context too, which a computeIfAbsent on it would not allow.
         @SuppressWarnings("unchecked")
-        Optional<Prepared> prepared = (Optional<Prepared>) getContext().computeIfAbsent(Prepared.class,
-                key -> prepare(phase));
+        Optional<Prepared> prepared = (Optional<Prepared>) getContext().get(Prepared.class);
+        if (prepared == null) {
+            prepared = prepare(phase);
+            getContext().put(Prepared.class, prepared);
+        }
         return prepared.orElse(null);
     }
 
-    private static Optional<Prepared> prepare(PhaseModel phase) {
+    private Optional<Prepared> prepare(PhaseModel phase) {
         try {
             OptionalLong size = expandedSize(phase);
             if (size.isEmpty() || size.getAsLong() > MAX_CHECKED_DIMENSION) {
                 return Optional.empty();
             }
-            DynamicalModel model = new ModelLowering().lower(phase);
+            ConstantValues constants = constants(phase);
+            FlatLayout layout = FlatLayout.of(phase, constants);
+            DynamicalModel model = new ModelLowering().lower(phase, constants, layout);
             PreparedField field = PreparedField.of(model);
-            return Optional.of(new Prepared(model, FlatLayout.of(phase), field,
+            return Optional.of(new Prepared(model, layout, field,
                     new EquivarianceCheck(field, model.time().name()), new HashMap<>()));
         } catch (RuntimeException notReady) { // errors elsewhere in the model, reported by their own checks
             return Optional.empty();
@@ -187,20 +192,32 @@ public class SymmetryChecks extends PhaseCheckBase {
      * What the element-by-element check has to expand: the number of states, or the largest index range when that
      * is larger (a sum over it becomes one term per value). Empty when a range is not known.
      */
-    private static OptionalLong expandedSize(PhaseModel phase) {
-        OptionalLong dimension = StudyChecks.dimension(phase);
+    private OptionalLong expandedSize(PhaseModel phase) {
+        // Asked by every symmetry declaration and by discovery: once per validation run.
+        OptionalLong cached = (OptionalLong) getContext().get(ExpandedSize.class);
+        if (cached == null) {
+            cached = expandedSize(phase, constants(phase));
+            getContext().put(ExpandedSize.class, cached);
+        }
+        return cached;
+    }
+
+    /** Key of {@link #expandedSize(PhaseModel)} in the validation context. */
+    private record ExpandedSize() {
+    }
+
+    private static OptionalLong expandedSize(PhaseModel phase, ConstantValues constants) {
+        OptionalLong dimension = StudyChecks.dimension(phase, constants);
         if (dimension.isEmpty()) {
             return dimension;
         }
         long largest = dimension.getAsLong();
-        ConstantValues constants = ConstantValues.of(phase);
         for (IndexDecl index : PhaseModels.membersOf(phase, IndexDecl.class)) {
-            OptionalDouble lower = IndexRanges.bound(index.getLower(), constants);
-            OptionalDouble upper = IndexRanges.bound(index.getUpper(), constants);
-            if (lower.isEmpty() || upper.isEmpty()) {
+            OptionalLong size = IndexRanges.size(index, constants);
+            if (size.isEmpty()) {
                 return OptionalLong.empty();
             }
-            largest = Math.max(largest, (long) upper.getAsDouble() - (long) lower.getAsDouble() + 1);
+            largest = Math.max(largest, size.getAsLong());
         }
         return OptionalLong.of(largest);
     }

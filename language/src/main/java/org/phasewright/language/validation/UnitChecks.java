@@ -8,6 +8,8 @@ import org.eclipse.xtext.EcoreUtil2;
 import org.eclipse.xtext.validation.Check;
 import org.phasewright.language.ast.Families;
 import org.phasewright.language.ast.PhaseModels;
+import org.phasewright.language.lowering.FlatLayout;
+import org.phasewright.language.lowering.LoweringException;
 import org.phasewright.language.phase.BasinsRequest;
 import org.phasewright.language.phase.Expression;
 import org.phasewright.language.phase.GridSpan;
@@ -101,12 +103,19 @@ public class UnitChecks extends PhaseCheckBase {
     public void simulationSettings(SimulateRequest simulate) {
         value(simulate.getEnd(), inference(simulate).timeDimension(), "The end time",
                 IssueCodes.WRONG_VALUE_DIMENSION);
+        // Start values are per flat element (a family takes one per index value), so position i is mapped
+        // through the flat layout; without a layout (unknown range, let cycle) the start values are not checked.
+        FlatLayout layout;
+        try {
+            layout = FlatLayout.of(model(simulate), constants(simulate));
+        } catch (LoweringException unknown) {
+            layout = null;
+        }
         for (int i = 0; i < simulate.getStart().size(); i++) {
-            var states = PhaseModels.states(model(simulate));
-            Optional<Dimension> expected = i < states.size() ? inference(simulate).ofSymbol(states.get(i))
-                    : Optional.empty();
-            value(simulate.getStart().get(i), expected, "The start value of '" + (i < states.size()
-                    ? states.get(i).getName() : "?") + "'", IssueCodes.WRONG_VALUE_DIMENSION);
+            StateDecl state = layout != null && i < layout.dimension() ? layout.stateAt(i) : null;
+            Optional<Dimension> expected = state != null ? inference(simulate).ofSymbol(state) : Optional.empty();
+            value(simulate.getStart().get(i), expected, "The start value of '" + (state != null ? state.getName()
+                    : "?") + "'", IssueCodes.WRONG_VALUE_DIMENSION);
         }
         value(simulate.getTolerance(), Optional.of(Dimension.NONE), "The tolerance", IssueCodes.WRONG_VALUE_DIMENSION);
     }

@@ -2,11 +2,9 @@ package org.phasewright.language.validation;
 
 import java.util.OptionalDouble;
 
-import org.eclipse.xtext.EcoreUtil2;
 import org.eclipse.xtext.validation.Check;
 import org.phasewright.language.lowering.ConstantValues;
 import org.phasewright.language.phase.ParamDecl;
-import org.phasewright.language.phase.PhaseModel;
 import org.phasewright.language.phase.SimulateRequest;
 
 /** Numeric sanity of values known before a run: params inside their ranges, positive end times and tolerances. */
@@ -52,12 +50,6 @@ public class ValueChecks extends PhaseCheckBase {
                         IssueCodes.BAD_TOLERANCE);
             }
         }
-    }
-
-    private ConstantValues constants(org.eclipse.emf.ecore.EObject inside) {
-        PhaseModel model = EcoreUtil2.getContainerOfType(inside, PhaseModel.class);
-        // One evaluation of all params per validation run, not per check.
-        return (ConstantValues) getContext().computeIfAbsent(ConstantValues.class, key -> ConstantValues.of(model));
     }
 
     static String format(double value) {

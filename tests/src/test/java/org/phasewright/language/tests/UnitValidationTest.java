@@ -111,6 +111,18 @@ class UnitValidationTest {
     }
 
     @Test
+    void startValuesFollowTheFlatElements() throws Exception {
+        // x[i] takes the first three start values, so the fourth is y's (in s), not x's (in m).
+        String base = "model m\ntime t in s\nparam L = 2 in m\nparam T = 3 in s\nindex i in 1 .. 3 bounded\n"
+                + "state x[i] = 1 in m\nstate y = 1 in s\nrate x[i] = 0\nrate y = 0\n";
+        Issue issue = single(base + "study s { simulate to t = 1 from (L, L, L, L) }\n",
+                IssueCodes.WRONG_VALUE_DIMENSION, 10, 44);
+        assertTrue(issue.getMessage().contains("start value of 'y' is in s"), issue.getMessage());
+        String fine = base + "study s { simulate to t = 1 from (L, L, L, T) }\n";
+        assertTrue(problems(fine).isEmpty(), () -> describe(fine));
+    }
+
+    @Test
     void rangeBoundInAnotherUnit() throws Exception {
         String text = "model m\ntime t in s\nparam v = 1 in m/s\nparam L = 1 in m range 0 .. v\nstate x = L in m\n"
                 + "rate x = v\n";

@@ -8,15 +8,12 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.apache.log4j.AppenderSkeleton;
-import org.apache.log4j.Level;
-import org.apache.log4j.Logger;
-import org.apache.log4j.spi.LoggingEvent;
 import org.eclipse.lsp4j.Diagnostic;
 import org.eclipse.lsp4j.Position;
 import org.junit.jupiter.api.Test;
 import org.phasewright.language.ide.server.PhaseServerModule;
 import org.phasewright.language.ide.tests.LanguageServerTestBase;
+import org.phasewright.language.ide.tests.LoggedErrors;
 
 import com.google.inject.Module;
 
@@ -40,33 +37,12 @@ class LanguageServerFuzzTest extends LanguageServerTestBase {
         int count = Integer.getInteger("phasewright.fuzz.lspTexts", 300);
         long seed = Long.getLong("phasewright.fuzz.seed", 20261202L) + 2;
         PhaseTextFuzzer fuzzer = new PhaseTextFuzzer(seed, PhaseTextFuzzer.exampleTexts());
-        List<String> logged = new ArrayList<>();
-        AppenderSkeleton listener = new AppenderSkeleton() {
-            @Override
-            protected void append(LoggingEvent event) {
-                if (event.getLevel().isGreaterOrEqual(Level.ERROR)) {
-                    synchronized (logged) {
-                        logged.add(event.getLoggerName() + ": " + event.getRenderedMessage());
-                    }
-                }
-            }
-
-            @Override
-            public void close() {
-            }
-
-            @Override
-            public boolean requiresLayout() {
-                return false;
-            }
-        };
         initialize();
         List<String> findings = new ArrayList<>();
         long start = System.nanoTime();
         long slowest = 0;
         int longest = 0;
-        Logger.getRootLogger().addAppender(listener);
-        try {
+        try (LoggedErrors logged = new LoggedErrors()) {
             for (int i = 0; i < count; i++) {
                 String text = fuzzer.next();
                 // A new file per text: reusing one name let diagnostics of an earlier text be read for a later one.
@@ -82,23 +58,18 @@ class LanguageServerFuzzTest extends LanguageServerTestBase {
                         findings.add("text " + i + ": range " + d.getRange() + " outside the text: " + d.getMessage());
                     }
                 }
-                synchronized (logged) {
-                    if (!logged.isEmpty()) {
-                        findings.add("text " + i + ": logged " + logged);
-                        logged.clear();
-                    }
+                List<String> errors = logged.take();
+                if (!errors.isEmpty()) {
+                    findings.add("text " + i + ": logged " + errors);
                 }
                 if (!findings.isEmpty() && findings.get(findings.size() - 1).startsWith("text " + i + ":")) {
                     FuzzOracle.save(Path.of("target", "fuzz-findings"), "lsp-seed" + seed + "-" + i, text);
                 }
-                // Delete before closing, so the server drops the file from its index: a later text must not link
-                // to names declared in this one (names resolve across the files of a workspace; see
-                // docs/reliability.md).
+                // Delete before closing, so the server drops the file from its index and the workspace does not
+                // grow by one file per text (names no longer resolve across files: OwnFileGlobalScopeProvider).
                 Files.deleteIfExists(Path.of(java.net.URI.create(uri)));
                 close(uri);
             }
-        } finally {
-            Logger.getRootLogger().removeAppender(listener);
         }
         System.out.printf("language server fuzz: seed %d, %d texts opened in %.1f s (slowest %.0f ms, longest %,d"
                 + " characters)%n", seed, count, (System.nanoTime() - start) / 1e9, slowest / 1e6, longest);

@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 
-import org.eclipse.emf.common.util.URI;
 import org.eclipse.lsp4j.CodeAction;
 import org.eclipse.lsp4j.CodeActionContext;
 import org.eclipse.lsp4j.CodeActionKind;
@@ -14,12 +13,9 @@ import org.eclipse.lsp4j.DiagnosticSeverity;
 import org.eclipse.lsp4j.Range;
 import org.eclipse.lsp4j.TextDocumentIdentifier;
 import org.eclipse.lsp4j.jsonrpc.messages.Either;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Assertions;
 import org.junit.jupiter.api.Test;
 import org.phasewright.language.linking.PhaseLinkingDiagnosticMessageProvider;
-import org.phasewright.language.standalone.PhaseFiles;
-import org.phasewright.language.standalone.Problem;
 import org.phasewright.language.validation.IssueCodes;
 
 /** Diagnostics are published with positions and codes; each quick fix, applied, removes its problem. */
@@ -37,24 +33,8 @@ class DiagnosticsAndQuickFixTest extends LanguageServerTestBase {
             }
             """;
 
-    private static PhaseFiles checker;
-
-    @BeforeAll
-    static void createChecker() {
-        checker = new PhaseFiles();
-    }
-
-    private static List<Problem> problems(String text) {
-        return checker.check("pond.phase", URI.createURI("inmemory:/pond.phase"), text).problems();
-    }
-
     private static boolean hasCode(String text, String code) {
         return problems(text).stream().anyMatch(p -> code.equals(p.code()));
-    }
-
-    private Diagnostic diagnostic(String uri, String code) {
-        return diagnosticsOf(uri).stream().filter(d -> d.getCode() != null && code.equals(d.getCode().getLeft()))
-                .findFirst().orElseThrow(() -> new AssertionError("no " + code + " in " + diagnosticsOf(uri)));
     }
 
     private List<CodeAction> actionsFor(String uri, Diagnostic diagnostic) {

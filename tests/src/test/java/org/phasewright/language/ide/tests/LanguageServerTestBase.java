@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ExecutionException;
 
+import org.eclipse.emf.common.util.URI;
 import org.eclipse.lsp4j.ClientCapabilities;
 import org.eclipse.lsp4j.Diagnostic;
 import org.eclipse.lsp4j.DidOpenTextDocumentParams;
@@ -23,10 +24,13 @@ import org.eclipse.xtext.resource.IResourceServiceProvider;
 import org.eclipse.xtext.testing.AbstractLanguageServerTest;
 import org.eclipse.xtext.util.Modules2;
 import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.io.TempDir;
 import org.phasewright.language.ide.PhaseIdeSetup;
 import org.phasewright.language.ide.server.PhaseServerModule;
+import org.phasewright.language.standalone.PhaseFiles;
+import org.phasewright.language.standalone.Problem;
 
 import com.google.inject.Guice;
 import com.google.inject.Injector;
@@ -41,6 +45,9 @@ public abstract class LanguageServerTestBase extends AbstractLanguageServerTest 
     @TempDir
     protected Path workspace;
 
+    /** The command-line checker, to compare the server's diagnostics with. */
+    private static PhaseFiles checker;
+
     protected LanguageServerTestBase() {
         super("phase");
     }
@@ -48,6 +55,25 @@ public abstract class LanguageServerTestBase extends AbstractLanguageServerTest 
     @Override
     protected Module getServerModule() {
         return Modules2.mixin(super.getServerModule(), new PhaseServerModule());
+    }
+
+    /** Before the server's setup, as each test class did on its own: setup then registers the server's injector. */
+    @BeforeAll
+    static void createChecker() {
+        if (checker == null) {
+            checker = new PhaseFiles();
+        }
+    }
+
+    /** What the command-line checker reports for {@code text} as a file pond.phase. */
+    static List<Problem> problems(String text) {
+        return checker.check("pond.phase", URI.createURI("inmemory:/pond.phase"), text).problems();
+    }
+
+    /** The first diagnostic of {@code uri} with issue code {@code code}. */
+    Diagnostic diagnostic(String uri, String code) {
+        return diagnosticsOf(uri).stream().filter(d -> d.getCode() != null && code.equals(d.getCode().getLeft()))
+                .findFirst().orElseThrow(() -> new AssertionError("no " + code + " in " + diagnosticsOf(uri)));
     }
 
     /** Like the harness's setup, but the workspace is a temporary folder instead of one under the working directory. */

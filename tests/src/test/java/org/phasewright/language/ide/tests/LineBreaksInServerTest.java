@@ -5,18 +5,15 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.eclipse.emf.common.util.URI;
 import org.eclipse.lsp4j.Diagnostic;
 import org.eclipse.lsp4j.DidChangeTextDocumentParams;
 import org.eclipse.lsp4j.Position;
 import org.eclipse.lsp4j.Range;
 import org.eclipse.lsp4j.TextDocumentContentChangeEvent;
 import org.eclipse.lsp4j.VersionedTextDocumentIdentifier;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Assertions;
 import org.junit.jupiter.api.Test;
 import org.phasewright.language.linking.PhaseLinkingDiagnosticMessageProvider;
-import org.phasewright.language.standalone.PhaseFiles;
 import org.phasewright.language.standalone.Problem;
 
 /**
@@ -34,17 +31,10 @@ class LineBreaksInServerTest extends LanguageServerTestBase {
             }
             """;
 
-    private static PhaseFiles checker;
-
-    @BeforeAll
-    static void createChecker() {
-        checker = new PhaseFiles();
-    }
-
     /** The checker's problems as LSP ranges' starts (0-based), with their messages. */
     private static List<String> checkerSays(String text) {
         List<String> said = new ArrayList<>();
-        for (Problem p : checker.check("pond.phase", URI.createURI("inmemory:/pond.phase"), text).problems()) {
+        for (Problem p : problems(text)) {
             said.add((p.line() - 1) + ":" + (p.column() - 1) + " " + p.message());
         }
         return said;
@@ -64,9 +54,7 @@ class LineBreaksInServerTest extends LanguageServerTestBase {
     }
 
     private Diagnostic unknownName(String uri) {
-        return diagnosticsOf(uri).stream()
-                .filter(d -> PhaseLinkingDiagnosticMessageProvider.UNKNOWN_NAME.equals(d.getCode().getLeft()))
-                .findFirst().orElseThrow(() -> new AssertionError("no unknown name in " + diagnosticsOf(uri)));
+        return diagnostic(uri, PhaseLinkingDiagnosticMessageProvider.UNKNOWN_NAME);
     }
 
     @Test

@@ -8,11 +8,14 @@ import org.apache.log4j.Level;
 import org.apache.log4j.Logger;
 import org.apache.log4j.spi.LoggingEvent;
 
-/** Collects what is logged at ERROR or above (the server logs exceptions of its requests) while it is open. */
-final class LoggedErrors extends AppenderSkeleton implements AutoCloseable {
+/**
+ * Collects what is logged at ERROR or above (the server logs exceptions of its requests) while it is open. Public
+ * for the language server fuzz test in another package.
+ */
+public final class LoggedErrors extends AppenderSkeleton implements AutoCloseable {
     private final List<String> messages = new ArrayList<>();
 
-    LoggedErrors() {
+    public LoggedErrors() {
         Logger.getRootLogger().addAppender(this);
     }
 
@@ -27,9 +30,18 @@ final class LoggedErrors extends AppenderSkeleton implements AutoCloseable {
         }
     }
 
-    List<String> messages() {
+    public List<String> messages() {
         synchronized (messages) {
             return List.copyOf(messages);
+        }
+    }
+
+    /** What was logged since the last call, so that each finding names the input that caused it. */
+    public List<String> take() {
+        synchronized (messages) {
+            List<String> taken = List.copyOf(messages);
+            messages.clear();
+            return taken;
         }
     }
 

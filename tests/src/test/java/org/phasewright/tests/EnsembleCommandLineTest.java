@@ -1,21 +1,16 @@
-package org.phasewright.tests.cli;
+package org.phasewright.tests;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.ByteArrayOutputStream;
-import java.io.PrintStream;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.List;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.phasewright.cli.Main;
 
 /**
  * Orbit diagrams, Lyapunov maps and basins written in the notation, run through Spark (embedded local[2]) and with
@@ -24,16 +19,6 @@ import org.phasewright.cli.Main;
 class EnsembleCommandLineTest {
     @TempDir
     Path dir;
-
-    private record Run(int code, String out, String err) {
-    }
-
-    private static Run run(String... args) {
-        ByteArrayOutputStream out = new ByteArrayOutputStream(), err = new ByteArrayOutputStream();
-        int code = Main.run(Arrays.asList(args), new PrintStream(out, true, StandardCharsets.UTF_8),
-                new PrintStream(err, true, StandardCharsets.UTF_8));
-        return new Run(code, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
-    }
 
     /** Runs the model both ways and returns the named result file of each (Spark first). */
     private List<String> bothWays(String name, String text, String study, String file) throws Exception {
@@ -44,8 +29,8 @@ class EnsembleCommandLineTest {
             Path out = dir.resolve(name + "-" + how.size());
             List<String> args = new ArrayList<>(List.of("run", model.toString(), "--out", out.toString()));
             args.addAll(how);
-            Run r = run(args.toArray(String[]::new));
-            assertEquals(0, r.code(), r.out() + r.err());
+            CommandLine r = CommandLine.run(args.toArray(String[]::new));
+            assertEquals(0, r.exitCode(), r.out() + r.err());
             // users see no Spark log lines (common practice for a command-line tool)
             assertFalse(r.err().contains(" INFO ") || r.err().contains("org.apache.spark"), r.err());
             assertTrue(r.out().contains(how.size() == 2 ? "Spark local[2]" : "thread"), r.out());
@@ -112,7 +97,7 @@ class EnsembleCommandLineTest {
 
     @Test
     void brusselatorOrbitDiagramIsTheSameThroughSpark() throws Exception {
-        Path example = Path.of(System.getProperty("phasewright.examples"), "brusselator.phase");
+        Path example = CommandLine.example("brusselator.phase");
         List<String> csv = bothWays("brusselator", Files.readString(example), "onset", "sweep.csv");
         assertEquals(csv.get(0), csv.get(1));
         assertTrue(csv.get(0).lines().count() > 100);
@@ -123,7 +108,7 @@ class EnsembleCommandLineTest {
         Path model = dir.resolve("tiny.phase");
         Files.writeString(model, "model tiny\nstate x = 1\nrate x = -x\n");
         // exit code 2 for usage errors, as documented in `phasewright help` (common practice)
-        assertEquals(2, run("run", model.toString(), "--master", "local[2]", "--no-spark").code());
-        assertEquals(2, run("run", model.toString(), "--master", "not a url").code());
+        assertEquals(2, CommandLine.run("run", model.toString(), "--master", "local[2]", "--no-spark").exitCode());
+        assertEquals(2, CommandLine.run("run", model.toString(), "--master", "not a url").exitCode());
     }
 }

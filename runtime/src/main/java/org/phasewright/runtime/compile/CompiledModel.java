@@ -21,9 +21,16 @@ public final class CompiledModel {
     private final Backend backend;
     private final String note;
     private final String generatedSource;
+    private final LatticeRates lattice;
 
     CompiledModel(DynamicalModel model, VectorField field, DerivedValues derivedValues, double[] parameters,
             double[] initialState, boolean autonomous, Backend backend, String note, String generatedSource) {
+        this(model, field, derivedValues, parameters, initialState, autonomous, backend, note, generatedSource, null);
+    }
+
+    CompiledModel(DynamicalModel model, VectorField field, DerivedValues derivedValues, double[] parameters,
+            double[] initialState, boolean autonomous, Backend backend, String note, String generatedSource,
+            LatticeRates lattice) {
         this.model = model;
         this.field = SparseJacobians.attach(model, field); // large or indexed models: sparse Jacobian too
         this.derivedValues = derivedValues;
@@ -33,6 +40,15 @@ public final class CompiledModel {
         this.backend = backend;
         this.note = note;
         this.generatedSource = generatedSource;
+        this.lattice = lattice;
+    }
+
+    /**
+     * The rates on windows of cells when the model is a lattice (see {@link LatticeRates}), for integrators that
+     * work tile by tile; null otherwise. Same values as {@link #field()}.
+     */
+    public LatticeRates lattice() {
+        return lattice;
     }
 
     public DynamicalModel model() {

@@ -65,10 +65,28 @@ public final class ModelCompiler {
         if (lazy) {
             LazyJacobianField field = new LazyJacobianField(model, (VectorField) instance, (DerivedValues) instance);
             return new CompiledModel(model, field, field, parameters, initial, autonomous(model),
-                    CompiledModel.Backend.GENERATED_CODE, null, source);
+                    CompiledModel.Backend.GENERATED_CODE, null, source, lattice(model));
         }
         return new CompiledModel(model, (VectorField) instance, (DerivedValues) instance, parameters, initial,
                 autonomous(model), CompiledModel.Backend.GENERATED_CODE, null, source);
+    }
+
+    /**
+     * The window rates of a lattice model (see {@link LatticeShape}), or null: not a lattice, or the kernel did not
+     * compile (then integrators use the whole-state rates, which give the same values).
+     */
+    static LatticeRates lattice(DynamicalModel model) {
+        LatticeShape shape = LatticeShape.of(model);
+        if (shape == null) {
+            return null;
+        }
+        try {
+            return (LatticeRates) load(new LatticeKernelGenerator(shape).generate(),
+                    JavaSourceGenerator.PACKAGE + "." + LatticeKernelGenerator.CLASS_NAME);
+        } catch (CompileException | ReflectiveOperationException | RuntimeException | LinkageError
+                | StackOverflowError e) {
+            return null;
+        }
     }
 
     /** The same model evaluated by walking the expression trees; slower, used as a reference. */

@@ -124,21 +124,36 @@ final class AdaptiveStepDriver {
      */
     void testStiffness(double h, double tNew, double[] kLast, double[] kPrev, double[] yLast, double[] yPrev,
             double boundary) {
-        if (Double.isNaN(stiffAt) && (accepted % STIFF_TEST_EVERY == 0 || stiffCount > 0)) {
+        if (stiffnessTestDue()) {
             double num = 0, den = 0;
             for (int i = 0; i < kLast.length; i++) {
                 double dk = kLast[i] - kPrev[i], dy = yLast[i] - yPrev[i];
                 num += dk * dk;
                 den += dy * dy;
             }
-            if (den > 0 && Math.abs(h) * Math.sqrt(num / den) > boundary) {
-                nonStiffCount = 0;
-                if (++stiffCount == STIFF_CONFIRMATIONS) {
-                    stiffAt = tNew;
-                }
-            } else if (++nonStiffCount == NONSTIFF_RESET) {
-                stiffCount = 0;
+            testStiffness(h, tNew, num, den, boundary);
+        }
+    }
+
+    /** True when the next step, if accepted, is one the stiffness test looks at (rejections change nothing). */
+    boolean stiffnessTestDueNext() {
+        return Double.isNaN(stiffAt) && ((accepted + 1) % STIFF_TEST_EVERY == 0 || stiffCount > 0);
+    }
+
+    /** True when the step being accepted is one the stiffness test looks at. */
+    boolean stiffnessTestDue() {
+        return Double.isNaN(stiffAt) && (accepted % STIFF_TEST_EVERY == 0 || stiffCount > 0);
+    }
+
+    /** The stiffness test with the two squared norms ‖kLast−kPrev‖² and ‖yLast−yPrev‖² already summed. */
+    void testStiffness(double h, double tNew, double num, double den, double boundary) {
+        if (den > 0 && Math.abs(h) * Math.sqrt(num / den) > boundary) {
+            nonStiffCount = 0;
+            if (++stiffCount == STIFF_CONFIRMATIONS) {
+                stiffAt = tNew;
             }
+        } else if (++nonStiffCount == NONSTIFF_RESET) {
+            stiffCount = 0;
         }
     }
 

@@ -16,37 +16,36 @@ import org.phasewright.runtime.compile.VectorField;
  */
 public final class DormandPrince54 implements Integrator {
     // Butcher tableau, HNW Table 5.2.
-    private static final double C2 = 1.0 / 5, C3 = 3.0 / 10, C4 = 4.0 / 5, C5 = 8.0 / 9;
-    private static final double A21 = 1.0 / 5;
-    private static final double A31 = 3.0 / 40, A32 = 9.0 / 40;
-    private static final double A41 = 44.0 / 45, A42 = -56.0 / 15, A43 = 32.0 / 9;
-    private static final double A51 = 19372.0 / 6561, A52 = -25360.0 / 2187, A53 = 64448.0 / 6561,
+    static final double C2 = 1.0 / 5, C3 = 3.0 / 10, C4 = 4.0 / 5, C5 = 8.0 / 9;
+    static final double A21 = 1.0 / 5;
+    static final double A31 = 3.0 / 40, A32 = 9.0 / 40;
+    static final double A41 = 44.0 / 45, A42 = -56.0 / 15, A43 = 32.0 / 9;
+    static final double A51 = 19372.0 / 6561, A52 = -25360.0 / 2187, A53 = 64448.0 / 6561,
             A54 = -212.0 / 729;
-    private static final double A61 = 9017.0 / 3168, A62 = -355.0 / 33, A63 = 46732.0 / 5247, A64 = 49.0 / 176,
+    static final double A61 = 9017.0 / 3168, A62 = -355.0 / 33, A63 = 46732.0 / 5247, A64 = 49.0 / 176,
             A65 = -5103.0 / 18656;
-    private static final double A71 = 35.0 / 384, A73 = 500.0 / 1113, A74 = 125.0 / 192, A75 = -2187.0 / 6784,
+    static final double A71 = 35.0 / 384, A73 = 500.0 / 1113, A74 = 125.0 / 192, A75 = -2187.0 / 6784,
             A76 = 11.0 / 84;
     // Difference between the 5th- and 4th-order weights (DOPRI5's E1..E7).
-    private static final double E1 = 71.0 / 57600, E3 = -71.0 / 16695, E4 = 71.0 / 1920, E5 = -17253.0 / 339200,
+    static final double E1 = 71.0 / 57600, E3 = -71.0 / 16695, E4 = 71.0 / 1920, E5 = -17253.0 / 339200,
             E6 = 22.0 / 525, E7 = -1.0 / 40;
     // Dense output (DOPRI5's D1..D7, Shampine's continuous extension).
-    private static final double D1 = -12715105075.0 / 11282082432.0, D3 = 87487479700.0 / 32700410799.0,
+    static final double D1 = -12715105075.0 / 11282082432.0, D3 = 87487479700.0 / 32700410799.0,
             D4 = -10690763975.0 / 1880347072.0, D5 = 701980252875.0 / 199316789632.0,
             D6 = -1453857185.0 / 822651844.0, D7 = 69997945.0 / 29380423.0;
 
     // Step-size control constants of DOPRI5.
-    private static final double SAFETY = 0.9, FAC_MIN = 0.2, FAC_MAX = 10.0, BETA = 0.04;
-    private static final double EXPO = 0.2 - BETA * 0.75;
+    static final double SAFETY = 0.9, FAC_MIN = 0.2, FAC_MAX = 10.0, BETA = 0.04;
+    static final double EXPO = 0.2 - BETA * 0.75;
     // Stiffness test of DOPRI5: boundary of the stability region along the negative axis.
-    private static final double STIFF_BOUNDARY = 3.25;
+    static final double STIFF_BOUNDARY = 3.25;
 
     private final VectorField field;
     private final double[] p;
     private final int n;
     private double[] y, yNew, k1, k7;
     private final double[] k2, k3, k4, k5, k6, yStage, errPart;
-    private final double[] r1, r2, r3, r4, r5; // continuous-extension coefficients of the last step
-    private final Dense dense = new Dense();
+    private final DormandPrinceDense dense;
 
     public DormandPrince54(VectorField field, double[] parameters) {
         this.field = field;
@@ -63,11 +62,7 @@ public final class DormandPrince54 implements Integrator {
         k6 = new double[n];
         yStage = new double[n];
         errPart = new double[n];
-        r1 = new double[n];
-        r2 = new double[n];
-        r3 = new double[n];
-        r4 = new double[n];
-        r5 = new double[n];
+        dense = new DormandPrinceDense(n);
     }
 
     /**
@@ -200,6 +195,7 @@ public final class DormandPrince54 implements Integrator {
 
     /** Coefficients of the continuous extension, computed before the FSAL swap (uses y, yNew, k1, k3..k7). */
     private void prepareDense(double h) {
+        double[] r1 = dense.r1, r2 = dense.r2, r3 = dense.r3, r4 = dense.r4, r5 = dense.r5;
         for (int i = 0; i < n; i++) {
             double yDiff = yNew[i] - y[i];
             double bSpl = h * k1[i] - yDiff;
@@ -208,18 +204,6 @@ public final class DormandPrince54 implements Integrator {
             r3[i] = bSpl;
             r4[i] = yDiff - h * k7[i] - bSpl;
             r5[i] = h * (D1 * k1[i] + D3 * k3[i] + D4 * k4[i] + D5 * k5[i] + D6 * k6[i] + D7 * k7[i]);
-        }
-    }
-
-    /** The last accepted step with the continuous extension of {@link #prepareDense}. */
-    private final class Dense extends AdaptiveStepDriver.View {
-        @Override
-        public void stateAt(double t, double[] out) {
-            double theta = (t - tOld) / h;
-            double theta1 = 1 - theta;
-            for (int i = 0; i < n; i++) {
-                out[i] = r1[i] + theta * (r2[i] + theta1 * (r3[i] + theta * (r4[i] + theta1 * r5[i])));
-            }
         }
     }
 }

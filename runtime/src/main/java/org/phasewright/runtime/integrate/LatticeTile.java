@@ -1,0 +1,276 @@
+package org.phasewright.runtime.integrate;
+
+import static org.phasewright.runtime.integrate.DormandPrince54.A21;
+import static org.phasewright.runtime.integrate.DormandPrince54.A31;
+import static org.phasewright.runtime.integrate.DormandPrince54.A32;
+import static org.phasewright.runtime.integrate.DormandPrince54.A41;
+import static org.phasewright.runtime.integrate.DormandPrince54.A42;
+import static org.phasewright.runtime.integrate.DormandPrince54.A43;
+import static org.phasewright.runtime.integrate.DormandPrince54.A51;
+import static org.phasewright.runtime.integrate.DormandPrince54.A52;
+import static org.phasewright.runtime.integrate.DormandPrince54.A53;
+import static org.phasewright.runtime.integrate.DormandPrince54.A54;
+import static org.phasewright.runtime.integrate.DormandPrince54.A61;
+import static org.phasewright.runtime.integrate.DormandPrince54.A62;
+import static org.phasewright.runtime.integrate.DormandPrince54.A63;
+import static org.phasewright.runtime.integrate.DormandPrince54.A64;
+import static org.phasewright.runtime.integrate.DormandPrince54.A65;
+import static org.phasewright.runtime.integrate.DormandPrince54.A71;
+import static org.phasewright.runtime.integrate.DormandPrince54.A73;
+import static org.phasewright.runtime.integrate.DormandPrince54.A74;
+import static org.phasewright.runtime.integrate.DormandPrince54.A75;
+import static org.phasewright.runtime.integrate.DormandPrince54.A76;
+import static org.phasewright.runtime.integrate.DormandPrince54.C2;
+import static org.phasewright.runtime.integrate.DormandPrince54.C3;
+import static org.phasewright.runtime.integrate.DormandPrince54.C4;
+import static org.phasewright.runtime.integrate.DormandPrince54.C5;
+import static org.phasewright.runtime.integrate.DormandPrince54.D1;
+import static org.phasewright.runtime.integrate.DormandPrince54.D3;
+import static org.phasewright.runtime.integrate.DormandPrince54.D4;
+import static org.phasewright.runtime.integrate.DormandPrince54.D5;
+import static org.phasewright.runtime.integrate.DormandPrince54.D6;
+import static org.phasewright.runtime.integrate.DormandPrince54.D7;
+import static org.phasewright.runtime.integrate.DormandPrince54.E1;
+import static org.phasewright.runtime.integrate.DormandPrince54.E3;
+import static org.phasewright.runtime.integrate.DormandPrince54.E4;
+import static org.phasewright.runtime.integrate.DormandPrince54.E5;
+import static org.phasewright.runtime.integrate.DormandPrince54.E6;
+import static org.phasewright.runtime.integrate.DormandPrince54.E7;
+
+import org.phasewright.runtime.compile.LatticeRates;
+
+/**
+ * One worker's window for {@link TiledDormandPrince54}: all seven stages of a Dormand–Prince step on a tile of
+ * cells plus a halo, in arrays small enough to stay in cache. With reaches L below and R above, stage s is known on
+ * the tile widened by (7−s)·L below and (7−s)·R above, so the window holds the tile and 6·(L+R) more cells.
+ * <p>
+ * Every array is indexed by window position, so the stage combinations read and write the same index (loops the JIT
+ * vectorises); the rates land in a scratch array shifted by L and are copied into place. Each combination is the
+ * same expression, in the same order, as in {@link DormandPrince54}, so a stage value is bit for bit the one the
+ * whole-state method computes.
+ */
+final class LatticeTile {
+    private final LatticeRates lattice;
+    private final int cells, components, below, above;
+    private final double[][] y, k1, k2, k3, k4, k5, k6, k7, yStage, yLast, scratch;
+    private final double[] work;
+    private static final int BLOCK = 64;
+    private final double[] partial = new double[BLOCK];
+
+    /** Sums over the tile's cells, filled by {@link #step}. */
+    double errorSquares, largest, stiffNumerator, stiffDenominator;
+
+    LatticeTile(LatticeRates lattice, int tileCells) {
+        this.lattice = lattice;
+        this.cells = lattice.cells();
+        this.components = lattice.components();
+        this.below = lattice.reachBelow();
+        this.above = lattice.reachAbove();
+        int width = tileCells + 6 * (below + above);
+        y = new double[components][width];
+        k1 = new double[components][width];
+        k2 = new double[components][width];
+        k3 = new double[components][width];
+        k4 = new double[components][width];
+        k5 = new double[components][width];
+        k6 = new double[components][width];
+        k7 = new double[components][width];
+        yStage = new double[components][width];
+        yLast = new double[components][width];
+        scratch = new double[components][width];
+        work = new double[width];
+    }
+
+    /** The whole-state arrays of one step attempt, shared by all tiles. */
+    record Step(double t, double h, double tNew, double[] p, double[] y, double[] k1, double[] yNew, double[] k7, double atol,
+            double rtol, boolean stiffness, DormandPrinceDense dense) {
+    }
+
+    /**
+     * The step on cells [first, first + n): writes their new state and last stage into s.yNew and s.k7 (and the
+     * continuous extension into s.dense when there is one), and sets the tile's error sum and largest |y|.
+     */
+    void step(Step s, int first, int n) {
+        int halo = 6 * below, width = n + 6 * (below + above);
+        long origin = (long) first - halo; // the cell at window position 0
+        for (int f = 0; f < components; f++) {
+            load(s.y(), f, origin, y[f], width);
+            load(s.k1(), f, origin, k1[f], width);
+        }
+        double t = s.t(), h = s.h();
+        int lo = 0, hi = width; // where the stage input is known
+        for (int f = 0; f < components; f++) {
+            double[] ys = yStage[f], yf = y[f], a = k1[f];
+            for (int q = lo; q < hi; q++) {
+                ys[q] = yf[q] + h * A21 * a[q];
+            }
+        }
+        rates(t + C2 * h, yStage, k2, s.p(), origin, lo, hi);
+        lo += below;
+        hi -= above;
+        for (int f = 0; f < components; f++) {
+            double[] ys = yStage[f], yf = y[f], a = k1[f], b = k2[f];
+            for (int q = lo; q < hi; q++) {
+                ys[q] = yf[q] + h * (A31 * a[q] + A32 * b[q]);
+            }
+        }
+        rates(t + C3 * h, yStage, k3, s.p(), origin, lo, hi);
+        lo += below;
+        hi -= above;
+        for (int f = 0; f < components; f++) {
+            double[] ys = yStage[f], yf = y[f], a = k1[f], b = k2[f], c = k3[f];
+            for (int q = lo; q < hi; q++) {
+                ys[q] = yf[q] + h * (A41 * a[q] + A42 * b[q] + A43 * c[q]);
+            }
+        }
+        rates(t + C4 * h, yStage, k4, s.p(), origin, lo, hi);
+        lo += below;
+        hi -= above;
+        for (int f = 0; f < components; f++) {
+            double[] ys = yStage[f], yf = y[f], a = k1[f], b = k2[f], c = k3[f], d = k4[f];
+            for (int q = lo; q < hi; q++) {
+                ys[q] = yf[q] + h * (A51 * a[q] + A52 * b[q] + A53 * c[q] + A54 * d[q]);
+            }
+        }
+        rates(t + C5 * h, yStage, k5, s.p(), origin, lo, hi);
+        lo += below;
+        hi -= above;
+        // Five terms split in two loops (fewer arrays per loop, which the JIT still vectorises); the partial sum
+        // keeps the left-to-right order, so the value is unchanged.
+        for (int f = 0; f < components; f++) {
+            double[] ys = yStage[f], yf = y[f], a = k1[f], b = k2[f], c = k3[f], d = k4[f], e = k5[f];
+            for (int q = lo; q < hi; q++) {
+                work[q] = A61 * a[q] + A62 * b[q] + A63 * c[q];
+            }
+            for (int q = lo; q < hi; q++) {
+                ys[q] = yf[q] + h * (work[q] + A64 * d[q] + A65 * e[q]);
+            }
+        }
+        double tNew = s.tNew();
+        rates(tNew, yStage, k6, s.p(), origin, lo, hi);
+        lo += below;
+        hi -= above;
+        for (int f = 0; f < components; f++) {
+            double[] yl = yLast[f], yf = y[f], a = k1[f], c = k3[f], d = k4[f], e = k5[f], g = k6[f];
+            for (int q = lo; q < hi; q++) {
+                work[q] = A71 * a[q] + A73 * c[q] + A74 * d[q];
+            }
+            for (int q = lo; q < hi; q++) {
+                yl[q] = yf[q] + h * (work[q] + A75 * e[q] + A76 * g[q]);
+            }
+        }
+        rates(tNew, yLast, k7, s.p(), origin, lo, hi);
+        lo += below;
+        hi -= above; // now [lo, hi) is the tile itself
+        finish(s, first, lo, hi);
+    }
+
+    /** New state, last stage and dense output out to the whole state; the tile's error and largest |y|. */
+    private void finish(Step s, int first, int lo, int hi) {
+        double h = s.h(), atol = s.atol(), rtol = s.rtol();
+        double squares = 0, big = 0, num = 0, den = 0;
+        for (int f = 0; f < components; f++) {
+            double[] yf = y[f], yl = yLast[f], a = k1[f], c = k3[f], d = k4[f], e = k5[f], g = k6[f], z = k7[f];
+            int flat = f * cells + first;
+            System.arraycopy(yl, lo, s.yNew(), flat, hi - lo);
+            System.arraycopy(z, lo, s.k7(), flat, hi - lo);
+            for (int q = lo; q < hi; q++) {
+                work[q] = E1 * a[q] + E3 * c[q] + E4 * d[q] + E5 * e[q] + E6 * g[q];
+            }
+            for (int q = lo; q < hi; q++) {
+                double sk = atol + rtol * Math.max(Math.abs(yf[q]), Math.abs(yl[q]));
+                double w = h * (work[q] + E7 * z[q]) / sk;
+                work[q] = w * w;
+            }
+            squares += blockSum(work, lo, hi);
+            big = Math.max(big, blockMaxAbs(yl, lo, hi));
+            if (s.stiffness()) {
+                double[] ys = yStage[f];
+                for (int q = lo; q < hi; q++) {
+                    double dk = z[q] - g[q], dy = yl[q] - ys[q];
+                    num += dk * dk;
+                    den += dy * dy;
+                }
+            }
+            DormandPrinceDense dense = s.dense();
+            if (dense != null) {
+                for (int q = lo; q < hi; q++) {
+                    int i = flat + q - lo;
+                    double yDiff = yl[q] - yf[q];
+                    double bSpl = h * a[q] - yDiff;
+                    dense.r1[i] = yf[q];
+                    dense.r2[i] = yDiff;
+                    dense.r3[i] = bSpl;
+                    dense.r4[i] = yDiff - h * z[q] - bSpl;
+                    dense.r5[i] = h * (D1 * a[q] + D3 * c[q] + D4 * d[q] + D5 * e[q] + D6 * g[q] + D7 * z[q]);
+                }
+            }
+        }
+        errorSquares = squares;
+        largest = big;
+        stiffNumerator = num;
+        stiffDenominator = den;
+    }
+
+    /**
+     * Sum of a[lo..hi) in BLOCK interleaved partial sums (a vectorisable loop instead of one long chain of
+     * dependent additions), then the partials and the rest in order: the same value on every run.
+     */
+    private double blockSum(double[] a, int lo, int hi) {
+        java.util.Arrays.fill(partial, 0.0);
+        int q = lo;
+        for (; q + BLOCK <= hi; q += BLOCK) {
+            for (int j = 0; j < BLOCK; j++) {
+                partial[j] += a[q + j];
+            }
+        }
+        double sum = 0;
+        for (double v : partial) {
+            sum += v;
+        }
+        for (; q < hi; q++) {
+            sum += a[q];
+        }
+        return sum;
+    }
+
+    /** max |a[lo..hi)| the same way; NaN when some entry is NaN (Math.max keeps NaN). */
+    private double blockMaxAbs(double[] a, int lo, int hi) {
+        java.util.Arrays.fill(partial, 0.0);
+        int q = lo;
+        for (; q + BLOCK <= hi; q += BLOCK) {
+            for (int j = 0; j < BLOCK; j++) {
+                partial[j] = Math.max(partial[j], Math.abs(a[q + j]));
+            }
+        }
+        double max = 0;
+        for (double v : partial) {
+            max = Math.max(max, v);
+        }
+        for (; q < hi; q++) {
+            max = Math.max(max, Math.abs(a[q]));
+        }
+        return max;
+    }
+
+    /** Rates at window positions [lo + below, hi - above) from the stage values on [lo, hi), into k. */
+    private void rates(double t, double[][] stage, double[][] k, double[] p, long origin, int lo, int hi) {
+        int count = hi - lo - below - above;
+        lattice.rates(t, stage, p, scratch, origin + below, lo, lo + count);
+        for (int f = 0; f < components; f++) {
+            System.arraycopy(scratch[f], lo, k[f], lo + below, count);
+        }
+    }
+
+    /** Component f of the whole state at cells origin, origin + 1, ... (wrapping around) into window[0, width). */
+    private void load(double[] whole, int f, long origin, double[] window, int width) {
+        int base = f * cells;
+        int j = 0;
+        while (j < width) {
+            int cell = (int) Math.floorMod(origin + j, (long) cells);
+            int run = Math.min(width - j, cells - cell);
+            System.arraycopy(whole, base + cell, window, j, run);
+            j += run;
+        }
+    }
+}

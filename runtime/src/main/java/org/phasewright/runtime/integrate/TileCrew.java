@@ -1,0 +1,83 @@
+package org.phasewright.runtime.integrate;
+
+import java.util.concurrent.atomic.AtomicInteger;
+import java.util.concurrent.locks.LockSupport;
+import java.util.function.IntConsumer;
+
+/**
+ * Helper threads for one integration that runs many short parallel passes (a few hundred microseconds each): the
+ * helpers live as long as the integration and spin briefly between passes instead of being woken by a pool, which
+ * would cost tens of microseconds per pass. They park when no pass comes, and stop on {@link #close}.
+ */
+final class TileCrew implements AutoCloseable {
+    /** How long a helper spins for the next pass before it parks. */
+    private static final long SPIN_NANOS = 200_000;
+
+    private final IntConsumer task;
+    private final Thread[] helpers;
+    private final AtomicInteger unfinished = new AtomicInteger();
+    private volatile int pass;
+    private volatile boolean closed;
+    private volatile Throwable failure;
+
+    /** {@code task.accept(w)} runs worker w's share of a pass: w = 0 on the caller, 1..workers-1 on helpers. */
+    TileCrew(int workers, IntConsumer task) {
+        this.task = task;
+        helpers = new Thread[workers - 1];
+        for (int w = 1; w < workers; w++) {
+            int worker = w;
+            helpers[w - 1] = Thread.ofPlatform().daemon().name("phasewright-tiles-" + w).unstarted(() -> serve(worker));
+            helpers[w - 1].start();
+        }
+    }
+
+    /** One pass: every worker's share, returning when all are done. */
+    void run() {
+        unfinished.set(helpers.length);
+        pass++; // publishes the caller's writes before it
+        for (Thread h : helpers) {
+            LockSupport.unpark(h);
+        }
+        task.accept(0);
+        while (unfinished.get() > 0) {
+            Thread.onSpinWait();
+        }
+        Throwable f = failure;
+        if (f != null) {
+            throw f instanceof RuntimeException r ? r : new IllegalStateException(f);
+        }
+    }
+
+    private void serve(int worker) {
+        int seen = 0;
+        while (true) {
+            long since = System.nanoTime();
+            while (pass == seen && !closed) {
+                if (System.nanoTime() - since < SPIN_NANOS) {
+                    Thread.onSpinWait();
+                } else {
+                    LockSupport.park(this);
+                }
+            }
+            if (closed) {
+                return;
+            }
+            seen = pass;
+            try {
+                task.accept(worker);
+            } catch (Throwable e) {
+                failure = e;
+            } finally {
+                unfinished.decrementAndGet();
+            }
+        }
+    }
+
+    @Override
+    public void close() {
+        closed = true;
+        for (Thread h : helpers) {
+            LockSupport.unpark(h);
+        }
+    }
+}

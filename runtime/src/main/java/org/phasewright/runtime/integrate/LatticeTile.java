@@ -100,69 +100,93 @@ final class LatticeTile {
         double t = s.t(), h = s.h();
         int lo = 0, hi = width; // where the stage input is known
         for (int f = 0; f < components; f++) {
-            double[] ys = yStage[f], yf = y[f], a = k1[f];
-            for (int q = lo; q < hi; q++) {
-                ys[q] = yf[q] + h * A21 * a[q];
-            }
+            stage(yStage[f], y[f], h, A21, k1[f], lo, hi);
         }
         rates(t + C2 * h, yStage, k2, s.p(), origin, lo, hi);
         lo += below;
         hi -= above;
         for (int f = 0; f < components; f++) {
-            double[] ys = yStage[f], yf = y[f], a = k1[f], b = k2[f];
-            for (int q = lo; q < hi; q++) {
-                ys[q] = yf[q] + h * (A31 * a[q] + A32 * b[q]);
-            }
+            stage(yStage[f], y[f], h, A31, k1[f], A32, k2[f], lo, hi);
         }
         rates(t + C3 * h, yStage, k3, s.p(), origin, lo, hi);
         lo += below;
         hi -= above;
         for (int f = 0; f < components; f++) {
-            double[] ys = yStage[f], yf = y[f], a = k1[f], b = k2[f], c = k3[f];
-            for (int q = lo; q < hi; q++) {
-                ys[q] = yf[q] + h * (A41 * a[q] + A42 * b[q] + A43 * c[q]);
-            }
+            stage(yStage[f], y[f], h, A41, k1[f], A42, k2[f], A43, k3[f], lo, hi);
         }
         rates(t + C4 * h, yStage, k4, s.p(), origin, lo, hi);
         lo += below;
         hi -= above;
         for (int f = 0; f < components; f++) {
-            double[] ys = yStage[f], yf = y[f], a = k1[f], b = k2[f], c = k3[f], d = k4[f];
-            for (int q = lo; q < hi; q++) {
-                ys[q] = yf[q] + h * (A51 * a[q] + A52 * b[q] + A53 * c[q] + A54 * d[q]);
-            }
+            stage(yStage[f], y[f], h, A51, k1[f], A52, k2[f], A53, k3[f], A54, k4[f], lo, hi);
         }
         rates(t + C5 * h, yStage, k5, s.p(), origin, lo, hi);
         lo += below;
         hi -= above;
-        // Five terms split in two loops (fewer arrays per loop, which the JIT still vectorises); the partial sum
-        // keeps the left-to-right order, so the value is unchanged.
+        // Five terms in two loops (fewer arrays per loop, which the JIT still vectorises); the partial sum keeps the
+        // left-to-right order, so the value is unchanged.
         for (int f = 0; f < components; f++) {
-            double[] ys = yStage[f], yf = y[f], a = k1[f], b = k2[f], c = k3[f], d = k4[f], e = k5[f];
-            for (int q = lo; q < hi; q++) {
-                work[q] = A61 * a[q] + A62 * b[q] + A63 * c[q];
-            }
-            for (int q = lo; q < hi; q++) {
-                ys[q] = yf[q] + h * (work[q] + A64 * d[q] + A65 * e[q]);
-            }
+            partial(work, A61, k1[f], A62, k2[f], A63, k3[f], lo, hi);
+            stage(yStage[f], y[f], h, work, A64, k4[f], A65, k5[f], lo, hi);
         }
         double tNew = s.tNew();
         rates(tNew, yStage, k6, s.p(), origin, lo, hi);
         lo += below;
         hi -= above;
         for (int f = 0; f < components; f++) {
-            double[] yl = yLast[f], yf = y[f], a = k1[f], c = k3[f], d = k4[f], e = k5[f], g = k6[f];
-            for (int q = lo; q < hi; q++) {
-                work[q] = A71 * a[q] + A73 * c[q] + A74 * d[q];
-            }
-            for (int q = lo; q < hi; q++) {
-                yl[q] = yf[q] + h * (work[q] + A75 * e[q] + A76 * g[q]);
-            }
+            partial(work, A71, k1[f], A73, k3[f], A74, k4[f], lo, hi);
+            stage(yLast[f], y[f], h, work, A75, k5[f], A76, k6[f], lo, hi);
         }
         rates(tNew, yLast, k7, s.p(), origin, lo, hi);
         lo += below;
         hi -= above; // now [lo, hi) is the tile itself
         finish(s, first, lo, hi);
+    }
+
+    // Stage combinations, one small method each so the JIT compiles (and vectorises) them early; each is the
+    // expression of DormandPrince54 with the coefficients as arguments, so values are the same bit for bit.
+
+    private static void stage(double[] ys, double[] y, double h, double c1, double[] k1, int lo, int hi) {
+        for (int q = lo; q < hi; q++) {
+            ys[q] = y[q] + h * c1 * k1[q];
+        }
+    }
+
+    private static void stage(double[] ys, double[] y, double h, double c1, double[] k1, double c2, double[] k2,
+            int lo, int hi) {
+        for (int q = lo; q < hi; q++) {
+            ys[q] = y[q] + h * (c1 * k1[q] + c2 * k2[q]);
+        }
+    }
+
+    private static void stage(double[] ys, double[] y, double h, double c1, double[] k1, double c2, double[] k2,
+            double c3, double[] k3, int lo, int hi) {
+        for (int q = lo; q < hi; q++) {
+            ys[q] = y[q] + h * (c1 * k1[q] + c2 * k2[q] + c3 * k3[q]);
+        }
+    }
+
+    private static void stage(double[] ys, double[] y, double h, double c1, double[] k1, double c2, double[] k2,
+            double c3, double[] k3, double c4, double[] k4, int lo, int hi) {
+        for (int q = lo; q < hi; q++) {
+            ys[q] = y[q] + h * (c1 * k1[q] + c2 * k2[q] + c3 * k3[q] + c4 * k4[q]);
+        }
+    }
+
+    /** The first three terms of a longer combination. */
+    private static void partial(double[] sum, double c1, double[] k1, double c2, double[] k2, double c3,
+            double[] k3, int lo, int hi) {
+        for (int q = lo; q < hi; q++) {
+            sum[q] = c1 * k1[q] + c2 * k2[q] + c3 * k3[q];
+        }
+    }
+
+    /** y + h (partial + c4 k4 + c5 k5), the rest of a five-term combination. */
+    private static void stage(double[] ys, double[] y, double h, double[] partial, double c4, double[] k4,
+            double c5, double[] k5, int lo, int hi) {
+        for (int q = lo; q < hi; q++) {
+            ys[q] = y[q] + h * (partial[q] + c4 * k4[q] + c5 * k5[q]);
+        }
     }
 
     /** New state, last stage and dense output out to the whole state; the tile's error and largest |y|. */

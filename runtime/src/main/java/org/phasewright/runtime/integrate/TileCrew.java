@@ -12,6 +12,8 @@ import java.util.function.IntConsumer;
 final class TileCrew implements AutoCloseable {
     /** How long a helper spins for the next pass before it parks. */
     private static final long SPIN_NANOS = 200_000;
+    /** How long the caller spins for the helpers to finish before it yields between polls. */
+    private static final long YIELD_AFTER_NANOS = 20_000;
 
     private final IntConsumer task;
     private final Thread[] helpers;
@@ -39,8 +41,13 @@ final class TileCrew implements AutoCloseable {
             LockSupport.unpark(h);
         }
         task.accept(0);
-        while (unfinished.get() > 0) {
-            Thread.onSpinWait();
+        long since = System.nanoTime();
+        while (unfinished.get() > 0) { // spin briefly, then leave the processor to others (the JIT's compilers)
+            if (System.nanoTime() - since < YIELD_AFTER_NANOS) {
+                Thread.onSpinWait();
+            } else {
+                Thread.yield();
+            }
         }
         Throwable f = failure;
         if (f != null) {
@@ -53,8 +60,11 @@ final class TileCrew implements AutoCloseable {
         while (true) {
             long since = System.nanoTime();
             while (pass == seen && !closed) {
-                if (System.nanoTime() - since < SPIN_NANOS) {
+                long waited = System.nanoTime() - since;
+                if (waited < YIELD_AFTER_NANOS) {
                     Thread.onSpinWait();
+                } else if (waited < SPIN_NANOS) {
+                    Thread.yield();
                 } else {
                     LockSupport.park(this);
                 }

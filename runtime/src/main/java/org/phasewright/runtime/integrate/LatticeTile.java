@@ -55,9 +55,13 @@ final class LatticeTile {
     private final double[][] y, k1, k2, k3, k4, k5, k6, k7, yStage, yLast, scratch;
     private final double[] work;
     private static final int BLOCK = 64;
-    private final double[] partial = new double[BLOCK];
+    private final double[] size, partialA = new double[BLOCK], partialB = new double[BLOCK];
+    private double sumA, sumB;
 
-    /** Sums over the tile's cells, filled by {@link #step}. */
+    /**
+     * Sums over the tile's cells, filled by {@link #step}; {@code largest} is max |y_new| when some value might
+     * exceed the blow-up bound or not be finite, and 0 when all are known to be within it.
+     */
     double errorSquares, largest, stiffNumerator, stiffDenominator;
 
     LatticeTile(LatticeRates lattice, int tileCells) {
@@ -79,11 +83,12 @@ final class LatticeTile {
         yLast = new double[components][width];
         scratch = new double[components][width];
         work = new double[width];
+        size = new double[width];
     }
 
     /** The whole-state arrays of one step attempt, shared by all tiles. */
     record Step(double t, double h, double tNew, double[] p, double[] y, double[] k1, double[] yNew, double[] k7, double atol,
-            double rtol, boolean stiffness, DormandPrinceDense dense) {
+            double rtol, double blowUpBound, boolean stiffness, DormandPrinceDense dense) {
     }
 
     /**
@@ -201,13 +206,22 @@ final class LatticeTile {
             for (int q = lo; q < hi; q++) {
                 work[q] = E1 * a[q] + E3 * c[q] + E4 * d[q] + E5 * e[q] + E6 * g[q];
             }
+            double inverseBound = 1 / s.blowUpBound();
             for (int q = lo; q < hi; q++) {
-                double sk = atol + rtol * Math.max(Math.abs(yf[q]), Math.abs(yl[q]));
+                double yi = yl[q];
+                double sk = atol + rtol * Math.max(Math.abs(yf[q]), Math.abs(yi));
                 double w = h * (work[q] + E7 * z[q]) / sk;
                 work[q] = w * w;
+                double r = yi * inverseBound;
+                size[q] = r * r;
             }
-            squares += blockSum(work, lo, hi);
-            big = Math.max(big, blockMaxAbs(yl, lo, hi));
+            blockSums(work, size, lo, hi);
+            squares += sumA;
+            // Σ (y/bound)² <= 1/4 means every |y| is below the bound (and finite): the exact maximum, a slower
+            // reduction, is only needed when some value might be out of bounds or not finite.
+            if (!(sumB <= 0.25)) {
+                big = Math.max(big, blockMaxAbs(yl, lo, hi));
+            }
             if (s.stiffness()) {
                 double[] ys = yStage[f];
                 for (int q = lo; q < hi; q++) {
@@ -237,38 +251,44 @@ final class LatticeTile {
     }
 
     /**
-     * Sum of a[lo..hi) in BLOCK interleaved partial sums (a vectorisable loop instead of one long chain of
-     * dependent additions), then the partials and the rest in order: the same value on every run.
+     * The sums of a[lo..hi) and b[lo..hi) into sumA and sumB, each in BLOCK interleaved partial sums (a vectorisable
+     * loop instead of one long chain of dependent additions), then the partials and the rest in order: the same
+     * value on every run.
      */
-    private double blockSum(double[] a, int lo, int hi) {
-        java.util.Arrays.fill(partial, 0.0);
+    private void blockSums(double[] a, double[] b, int lo, int hi) {
+        java.util.Arrays.fill(partialA, 0.0);
+        java.util.Arrays.fill(partialB, 0.0);
         int q = lo;
         for (; q + BLOCK <= hi; q += BLOCK) {
             for (int j = 0; j < BLOCK; j++) {
-                partial[j] += a[q + j];
+                partialA[j] += a[q + j];
+                partialB[j] += b[q + j];
             }
         }
-        double sum = 0;
-        for (double v : partial) {
-            sum += v;
+        double sa = 0, sb = 0;
+        for (int j = 0; j < BLOCK; j++) {
+            sa += partialA[j];
+            sb += partialB[j];
         }
         for (; q < hi; q++) {
-            sum += a[q];
+            sa += a[q];
+            sb += b[q];
         }
-        return sum;
+        sumA = sa;
+        sumB = sb;
     }
 
     /** max |a[lo..hi)| the same way; NaN when some entry is NaN (Math.max keeps NaN). */
     private double blockMaxAbs(double[] a, int lo, int hi) {
-        java.util.Arrays.fill(partial, 0.0);
+        java.util.Arrays.fill(partialA, 0.0);
         int q = lo;
         for (; q + BLOCK <= hi; q += BLOCK) {
             for (int j = 0; j < BLOCK; j++) {
-                partial[j] = Math.max(partial[j], Math.abs(a[q + j]));
+                partialA[j] = Math.max(partialA[j], Math.abs(a[q + j]));
             }
         }
         double max = 0;
-        for (double v : partial) {
+        for (double v : partialA) {
             max = Math.max(max, v);
         }
         for (; q < hi; q++) {

@@ -117,7 +117,7 @@ public final class TiledDormandPrince54 implements Integrator {
             }
             double tNew = last ? tEnd : t + h;
             boolean stiffness = b.stiffnessTestDueNext();
-            attempt(new LatticeTile.Step(t, h, tNew, p, y, k1, yNew, k7, atol[0], rtol[0], stiffness,
+            attempt(new LatticeTile.Step(t, h, tNew, p, y, k1, yNew, k7, atol[0], rtol[0], s.blowUpBound(), stiffness,
                     observer == null ? null : dense), crew);
             b.evaluations += 6;
 

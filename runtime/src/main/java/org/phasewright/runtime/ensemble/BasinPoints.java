@@ -3,7 +3,7 @@ package org.phasewright.runtime.ensemble;
 import java.util.function.BooleanSupplier;
 
 import org.phasewright.runtime.compile.CompiledModel;
-import org.phasewright.runtime.integrate.DormandPrince54;
+import org.phasewright.runtime.integrate.ExplicitMethod;
 import org.phasewright.runtime.integrate.IntegrationOutcome;
 
 /**
@@ -44,8 +44,9 @@ public record BasinPoints(ModelShape shape, double[] parameters, double[] initia
 
     @Override
     public BasinPoint compute(CompiledModel model, int point, long deadlineNanos, BooleanSupplier cancelled) {
-        IntegrationOutcome o = new DormandPrince54(model.field(), parameters).integrate(0.0, start(point), endTime,
-                integration.settings(deadlineNanos, cancelled), null);
+        // one worker: the ensemble already runs many points at once
+        IntegrationOutcome o = ExplicitMethod.create(model.field(), model.lattice(), parameters, 1)
+                .integrate(0.0, start(point), endTime, integration.settings(deadlineNanos, cancelled), null);
         return new BasinPoint(o.completed() ? label(o.state()) : NONE, o.ending().name());
     }
 

@@ -13,7 +13,7 @@ import org.phasewright.runtime.equilibria.EquilibriumSearchOutcome;
 import org.phasewright.runtime.equilibria.EquilibriumSettings;
 import org.phasewright.runtime.equilibria.PolynomialRoots;
 import org.phasewright.runtime.equilibria.StartPoints;
-import org.phasewright.runtime.integrate.DormandPrince54;
+import org.phasewright.runtime.integrate.ExplicitMethod;
 import org.phasewright.runtime.integrate.IntegratorSettings;
 import org.phasewright.runtime.symmetry.SymmetryAnalysis;
 import org.phasewright.runtime.symmetry.SymmetryReport;
@@ -120,7 +120,8 @@ final class EquilibriumSearchRunner {
                 .withBlowUpBound(settings.blowUpBound())
                 .withDeadline(budget.deadlineNanos())
                 .withCancellation(budget.cancelled());
-        new DormandPrince54(model.field(), p).integrate(0.0, initial, 1e9, s, step -> {
+        ExplicitMethod.create(model.field(), model.lattice(), p, Runtime.getRuntime().availableProcessors())
+                .integrate(0.0, initial, 1e9, s, step -> {
             if (last.size() == keep) {
                 last.removeFirst();
             }

@@ -1,11 +1,10 @@
 package org.phasewright.runtime.study;
 
 import org.phasewright.runtime.compile.CompiledModel;
-import org.phasewright.runtime.integrate.DormandPrince54;
 import org.phasewright.runtime.integrate.DormandPrince853;
+import org.phasewright.runtime.integrate.ExplicitMethod;
 import org.phasewright.runtime.integrate.Integrator;
 import org.phasewright.runtime.integrate.Rodas4;
-import org.phasewright.runtime.integrate.TiledDormandPrince54;
 import org.phasewright.runtime.model.IntegrationMethod;
 
 /** Maps the method named in a study to an integrator for a compiled model. */
@@ -13,15 +12,10 @@ final class IntegratorChoice {
     private IntegratorChoice() {
     }
 
-    /** Lattices from this many cells run the explicit method tile by tile, on all processors. */
-    static final int TILED_FROM_CELLS = 8192;
-
     static Integrator create(IntegrationMethod method, CompiledModel model, double[] p) {
         return switch (method) {
-            case EXPLICIT -> model.lattice() != null && model.lattice().cells() >= TILED_FROM_CELLS
-                    ? new TiledDormandPrince54(model.field(), model.lattice(), p,
-                            Runtime.getRuntime().availableProcessors())
-                    : new DormandPrince54(model.field(), p);
+            case EXPLICIT -> ExplicitMethod.create(model.field(), model.lattice(), p,
+                    Runtime.getRuntime().availableProcessors());
             case HIGH_ORDER -> new DormandPrince853(model.field(), p);
             case STIFF -> new Rodas4(model.field(), p, model.autonomous());
         };

@@ -9,7 +9,7 @@ import org.phasewright.runtime.compile.VectorField;
 import org.phasewright.runtime.continuation.ParameterVector;
 import org.phasewright.runtime.integrate.CrossingLocator;
 import org.phasewright.runtime.integrate.DenseStep;
-import org.phasewright.runtime.integrate.DormandPrince54;
+import org.phasewright.runtime.integrate.ExplicitMethod;
 import org.phasewright.runtime.integrate.IntegrationOutcome;
 import org.phasewright.runtime.integrate.IntegratorSettings;
 import org.phasewright.runtime.integrate.StepObserver;
@@ -74,8 +74,9 @@ public final class OrbitDiagram {
                 }
             }
         };
-        IntegrationOutcome outcome = new DormandPrince54(field, p).integrate(0.0, u0, endTime, settings,
-                afterTransients);
+        // one worker: the ensemble already runs many columns at once
+        IntegrationOutcome outcome = ExplicitMethod.create(field, model.lattice(), p, 1).integrate(0.0, u0, endTime,
+                settings, afterTransients);
         double[][] maxima = new double[n][];
         for (int i = 0; i < n; i++) {
             double[] times = locators.get(i).times();

@@ -6,15 +6,16 @@ import org.junit.jupiter.api.Test;
 import org.phasewright.runtime.compile.CompiledModel;
 import org.phasewright.runtime.compile.ModelCompiler;
 import org.phasewright.runtime.integrate.DormandPrince54;
+import org.phasewright.runtime.integrate.ExplicitMethod;
 import org.phasewright.runtime.integrate.TiledDormandPrince54;
 import org.phasewright.runtime.linalg.LatticeModels;
 import org.phasewright.runtime.model.IntegrationMethod;
 
-/** The explicit method runs tile by tile only for cyclic lattices of at least {@code TILED_FROM_CELLS} cells. */
+/** The explicit method runs tile by tile only for cyclic lattices of at least {@link ExplicitMethod#TILED_FROM_CELLS} cells. */
 class IntegratorChoiceTest {
     @Test
     void largeCyclicRingRunsTileByTile() {
-        CompiledModel ring = ModelCompiler.compile(LatticeModels.lorenz96(IntegratorChoice.TILED_FROM_CELLS, 8, true));
+        CompiledModel ring = ModelCompiler.compile(LatticeModels.lorenz96(ExplicitMethod.TILED_FROM_CELLS, 8, true));
         assertInstanceOf(TiledDormandPrince54.class,
                 IntegratorChoice.create(IntegrationMethod.EXPLICIT, ring, ring.parameters()));
     }
@@ -25,7 +26,7 @@ class IntegratorChoiceTest {
         assertInstanceOf(DormandPrince54.class,
                 IntegratorChoice.create(IntegrationMethod.EXPLICIT, small, small.parameters()));
         CompiledModel bounded = ModelCompiler.compile(
-                LatticeModels.lorenz96(IntegratorChoice.TILED_FROM_CELLS, 8, false));
+                LatticeModels.lorenz96(ExplicitMethod.TILED_FROM_CELLS, 8, false));
         assertInstanceOf(DormandPrince54.class,
                 IntegratorChoice.create(IntegrationMethod.EXPLICIT, bounded, bounded.parameters()));
     }

@@ -20,7 +20,7 @@ final class LatticeKernelGenerator implements JavaExpressionWriter.Indexed {
     static final String CLASS_NAME = "GeneratedLatticeRates";
 
     private final LatticeShape shape;
-    private final JavaExpressionWriter writer = new JavaExpressionWriter(true);
+    private final JavaExpressionWriter writer = new JavaExpressionWriter();
     private final Map<Integer, Integer> componentAtOffset = new HashMap<>();
     private final Map<Integer, String> parameterLocals = new HashMap<>();
     private final StringBuilder preamble = new StringBuilder();

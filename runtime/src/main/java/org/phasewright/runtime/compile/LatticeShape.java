@@ -74,7 +74,7 @@ record LatticeShape(IndexRange range, List<Family> components, int reachBelow, i
             case Element el -> {
                 LinearIndex li = LinearIndex.of(el.index());
                 if (li == null || !index.equals(li.unitShiftOf()) || !sameRange(el.range(), range)
-                        || Math.abs(li.constant()) > range.size()) {
+                        || li.constant() < -MAX_REACH || li.constant() > MAX_REACH) {
                     yield false;
                 }
                 if (el.kind() == VariableKind.STATE) {

@@ -11,7 +11,8 @@ import org.phasewright.runtime.linalg.Vectors;
  */
 final class AdaptiveStepDriver {
     private static final double UROUND = 2.3e-16;
-    // Stiffness test of DOPRI5 and DOP853 (HNW I, Section II.10): how often to test, and how many tests decide.
+    // Stiffness test of DOPRI5 and DOP853 (HNW II, Section IV.2, from memory): how often to test, and how many
+    // tests decide.
     private static final int STIFF_TEST_EVERY = 1000, STIFF_CONFIRMATIONS = 15, NONSTIFF_RESET = 6;
 
     long evaluations, accepted, rejected;

@@ -10,9 +10,9 @@ import org.phasewright.runtime.compile.VectorField;
  * <p>
  * An instance owns its work arrays, so the step loop allocates nothing; it is not thread-safe but can be reused.
  * <p>
- * Stiffness detection follows DOPRI5 (HNW I, Section II.10 and IV.2): stages 6 and 7 are both evaluated at t+h, so
- * |h|·‖k7−k6‖/‖y7−y6‖ estimates |h·λ| for the dominant eigenvalue; when it stays beyond the method's stability
- * boundary (3.25) for 15 tested steps the outcome reports the time.
+ * Stiffness detection follows DOPRI5 (HNW II, Section IV.2, from memory): stages 6 and 7 are both evaluated at
+ * t+h, so |h|·‖k7−k6‖/‖y7−y6‖ estimates |h·λ| for the dominant eigenvalue; when it stays beyond the method's
+ * stability boundary (3.25) for 15 tested steps the outcome reports the time.
  */
 public final class DormandPrince54 implements Integrator {
     // Butcher tableau, HNW Table 5.2.
@@ -29,14 +29,9 @@ public final class DormandPrince54 implements Integrator {
     // Difference between the 5th- and 4th-order weights (DOPRI5's E1..E7).
     static final double E1 = 71.0 / 57600, E3 = -71.0 / 16695, E4 = 71.0 / 1920, E5 = -17253.0 / 339200,
             E6 = 22.0 / 525, E7 = -1.0 / 40;
-    // Dense output (DOPRI5's D1..D7, Shampine's continuous extension).
-    static final double D1 = -12715105075.0 / 11282082432.0, D3 = 87487479700.0 / 32700410799.0,
-            D4 = -10690763975.0 / 1880347072.0, D5 = 701980252875.0 / 199316789632.0,
-            D6 = -1453857185.0 / 822651844.0, D7 = 69997945.0 / 29380423.0;
-
     // Step-size control constants of DOPRI5.
-    static final double SAFETY = 0.9, FAC_MIN = 0.2, FAC_MAX = 10.0, BETA = 0.04;
-    static final double EXPO = 0.2 - BETA * 0.75;
+    private static final double SAFETY = 0.9, FAC_MIN = 0.2, FAC_MAX = 10.0, BETA = 0.04;
+    private static final double EXPO = 0.2 - BETA * 0.75;
     // Stiffness test of DOPRI5: boundary of the stability region along the negative axis.
     static final double STIFF_BOUNDARY = 3.25;
 
@@ -87,7 +82,7 @@ public final class DormandPrince54 implements Integrator {
         double direction = b.direction;
         double h = direction * (s.initialStep() > 0 ? Math.min(s.initialStep(), b.hMax)
                 : b.initialStep(field, p, t, y, k1, yStage, k2, rtol, atol, 5));
-        double facOld = 1e-4;
+        StepSizeControl control = control();
 
         while (true) {
             IntegrationOutcome budget = b.beforeAttempt(t, y, h);
@@ -160,12 +155,9 @@ public final class DormandPrince54 implements Integrator {
                 continue;
             }
 
-            double fac11 = Math.pow(err, EXPO);
-            double fac = fac11 / Math.pow(facOld, BETA);
-            fac = Math.max(1 / FAC_MAX, Math.min(1 / FAC_MIN, fac / SAFETY));
-            double hNew = h / fac;
+            double hNew;
             if (err <= 1.0) {
-                facOld = Math.max(err, 1e-4);
+                hNew = control.accepted(err, h);
                 b.accepted++;
                 b.testStiffness(h, tNew, k7, k6, yNew, yStage, STIFF_BOUNDARY);
                 if (observer != null) {
@@ -186,24 +178,22 @@ public final class DormandPrince54 implements Integrator {
                 }
                 hNew = b.nextStep(hNew, h);
             } else {
-                hNew = h / Math.min(1 / FAC_MIN, fac11 / SAFETY);
+                hNew = control.rejected(err, h);
                 b.reject();
             }
             h = hNew;
         }
     }
 
+    /** DOPRI5's PI controller. */
+    static StepSizeControl control() {
+        return new StepSizeControl(EXPO, BETA, SAFETY, FAC_MIN, FAC_MAX);
+    }
+
     /** Coefficients of the continuous extension, computed before the FSAL swap (uses y, yNew, k1, k3..k7). */
     private void prepareDense(double h) {
-        double[] r1 = dense.r1, r2 = dense.r2, r3 = dense.r3, r4 = dense.r4, r5 = dense.r5;
         for (int i = 0; i < n; i++) {
-            double yDiff = yNew[i] - y[i];
-            double bSpl = h * k1[i] - yDiff;
-            r1[i] = y[i];
-            r2[i] = yDiff;
-            r3[i] = bSpl;
-            r4[i] = yDiff - h * k7[i] - bSpl;
-            r5[i] = h * (D1 * k1[i] + D3 * k3[i] + D4 * k4[i] + D5 * k5[i] + D6 * k6[i] + D7 * k7[i]);
+            dense.set(i, y[i], yNew[i], h, k1[i], k3[i], k4[i], k5[i], k6[i], k7[i]);
         }
     }
 }

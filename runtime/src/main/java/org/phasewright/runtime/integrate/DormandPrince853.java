@@ -239,6 +239,7 @@ public final class DormandPrince853 implements Integrator {
         double direction = b.direction;
         double h = direction * (s.initialStep() > 0 ? Math.min(s.initialStep(), b.hMax)
                 : b.initialStep(field, p, t, y, k0, yStage, k1, rtol, atol, 8));
+        StepSizeControl control = new StepSizeControl(EXPO, 0, SAFETY, FAC_MIN, FAC_MAX); // no PI term in DOP853
 
         while (true) {
             IntegrationOutcome budget = b.beforeAttempt(t, y, h);
@@ -272,10 +273,9 @@ public final class DormandPrince853 implements Integrator {
                 continue;
             }
 
-            double fac11 = Math.pow(err, EXPO);
-            double fac = Math.max(1 / FAC_MAX, Math.min(1 / FAC_MIN, fac11 / SAFETY));
-            double hNew = h / fac;
+            double hNew;
             if (err <= 1.0) {
+                hNew = control.accepted(err, h);
                 b.accepted++;
                 b.testStiffness(h, tNew, k12, k11, yNew, yStage, STIFF_BOUNDARY);
                 if (observer != null) {
@@ -296,7 +296,7 @@ public final class DormandPrince853 implements Integrator {
                 }
                 hNew = b.nextStep(hNew, h);
             } else {
-                hNew = h / Math.min(1 / FAC_MIN, fac11 / SAFETY);
+                hNew = control.rejected(err, h);
                 b.reject();
             }
             h = hNew;

@@ -2,10 +2,15 @@ package org.phasewright.runtime.integrate;
 
 /**
  * The last accepted Dormand–Prince 5(4) step with Shampine's 4th-order continuous extension (HNW I, Section II.6,
- * as in DOPRI5's CONTD5): the integrators fill r1..r5 per component after accepting a step.
+ * as in DOPRI5's CONTD5): the integrators fill the coefficients per component with {@link #set} after a step.
  */
 final class DormandPrinceDense extends AdaptiveStepDriver.View {
-    final double[] r1, r2, r3, r4, r5;
+    // DOPRI5's D1..D7.
+    private static final double D1 = -12715105075.0 / 11282082432.0, D3 = 87487479700.0 / 32700410799.0,
+            D4 = -10690763975.0 / 1880347072.0, D5 = 701980252875.0 / 199316789632.0,
+            D6 = -1453857185.0 / 822651844.0, D7 = 69997945.0 / 29380423.0;
+
+    private double[] r1, r2, r3, r4, r5;
 
     DormandPrinceDense(int n) {
         r1 = new double[n];
@@ -13,6 +18,37 @@ final class DormandPrinceDense extends AdaptiveStepDriver.View {
         r3 = new double[n];
         r4 = new double[n];
         r5 = new double[n];
+    }
+
+    /** Component i's coefficients from the step y0 → y1 of size h and its stages. */
+    void set(int i, double y0, double y1, double h, double k1, double k3, double k4, double k5, double k6,
+            double k7) {
+        double yDiff = y1 - y0;
+        double bSpl = h * k1 - yDiff;
+        r1[i] = y0;
+        r2[i] = yDiff;
+        r3[i] = bSpl;
+        r4[i] = yDiff - h * k7 - bSpl;
+        r5[i] = h * (D1 * k1 + D3 * k3 + D4 * k4 + D5 * k5 + D6 * k6 + D7 * k7);
+    }
+
+    /** Exchanges coefficients with {@code other}: a step's are prepared aside and become this one's on acceptance. */
+    void swapCoefficients(DormandPrinceDense other) {
+        double[] a = r1;
+        r1 = other.r1;
+        other.r1 = a;
+        a = r2;
+        r2 = other.r2;
+        other.r2 = a;
+        a = r3;
+        r3 = other.r3;
+        other.r3 = a;
+        a = r4;
+        r4 = other.r4;
+        other.r4 = a;
+        a = r5;
+        r5 = other.r5;
+        other.r5 = a;
     }
 
     @Override

@@ -24,12 +24,6 @@ import static org.phasewright.runtime.integrate.DormandPrince54.C2;
 import static org.phasewright.runtime.integrate.DormandPrince54.C3;
 import static org.phasewright.runtime.integrate.DormandPrince54.C4;
 import static org.phasewright.runtime.integrate.DormandPrince54.C5;
-import static org.phasewright.runtime.integrate.DormandPrince54.D1;
-import static org.phasewright.runtime.integrate.DormandPrince54.D3;
-import static org.phasewright.runtime.integrate.DormandPrince54.D4;
-import static org.phasewright.runtime.integrate.DormandPrince54.D5;
-import static org.phasewright.runtime.integrate.DormandPrince54.D6;
-import static org.phasewright.runtime.integrate.DormandPrince54.D7;
 import static org.phasewright.runtime.integrate.DormandPrince54.E1;
 import static org.phasewright.runtime.integrate.DormandPrince54.E3;
 import static org.phasewright.runtime.integrate.DormandPrince54.E4;
@@ -53,16 +47,16 @@ final class LatticeTile {
     private final LatticeRates lattice;
     private final int cells, components, below, above;
     private final double[][] y, k1, k2, k3, k4, k5, k6, k7, yStage, yLast, scratch;
-    private final double[] work;
+    private final double[] terms;
     private static final int BLOCK = 64;
     private final double[] size, partialA = new double[BLOCK], partialB = new double[BLOCK];
     private double sumA, sumB;
 
     /**
-     * Sums over the tile's cells, filled by {@link #step}; {@code largest} is max |y_new| when some value might
-     * exceed the blow-up bound or not be finite, and 0 when all are known to be within it.
+     * Sums over the tile's cells, filled by {@link #step}; {@code largestIfNearBound} is max |y_new| when some value
+     * might exceed the blow-up bound or not be finite, and 0 when all are known to be within half of it.
      */
-    double errorSquares, largest, stiffNumerator, stiffDenominator;
+    double errorSquares, largestIfNearBound, stiffNumerator, stiffDenominator;
 
     LatticeTile(LatticeRates lattice, int tileCells) {
         this.lattice = lattice;
@@ -82,13 +76,13 @@ final class LatticeTile {
         yStage = new double[components][width];
         yLast = new double[components][width];
         scratch = new double[components][width];
-        work = new double[width];
+        terms = new double[width];
         size = new double[width];
     }
 
     /** The whole-state arrays of one step attempt, shared by all tiles. */
-    record Step(double t, double h, double tNew, double[] p, double[] y, double[] k1, double[] yNew, double[] k7, double atol,
-            double rtol, double blowUpBound, boolean stiffness, DormandPrinceDense dense) {
+    record Step(double t, double h, double tNew, double[] p, double[] y, double[] k1, double[] yNew, double[] k7,
+            double atol, double rtol, double blowUpBound, boolean stiffness, DormandPrinceDense dense) {
     }
 
     /**
@@ -131,16 +125,16 @@ final class LatticeTile {
         // Five terms in two loops (fewer arrays per loop, which the JIT still vectorises); the partial sum keeps the
         // left-to-right order, so the value is unchanged.
         for (int f = 0; f < components; f++) {
-            partial(work, A61, k1[f], A62, k2[f], A63, k3[f], lo, hi);
-            stage(yStage[f], y[f], h, work, A64, k4[f], A65, k5[f], lo, hi);
+            partial(terms, A61, k1[f], A62, k2[f], A63, k3[f], lo, hi);
+            stage(yStage[f], y[f], h, terms, A64, k4[f], A65, k5[f], lo, hi);
         }
         double tNew = s.tNew();
         rates(tNew, yStage, k6, s.p(), origin, lo, hi);
         lo += below;
         hi -= above;
         for (int f = 0; f < components; f++) {
-            partial(work, A71, k1[f], A73, k3[f], A74, k4[f], lo, hi);
-            stage(yLast[f], y[f], h, work, A75, k5[f], A76, k6[f], lo, hi);
+            partial(terms, A71, k1[f], A73, k3[f], A74, k4[f], lo, hi);
+            stage(yLast[f], y[f], h, terms, A75, k5[f], A76, k6[f], lo, hi);
         }
         rates(tNew, yLast, k7, s.p(), origin, lo, hi);
         lo += below;
@@ -204,18 +198,18 @@ final class LatticeTile {
             System.arraycopy(yl, lo, s.yNew(), flat, hi - lo);
             System.arraycopy(z, lo, s.k7(), flat, hi - lo);
             for (int q = lo; q < hi; q++) {
-                work[q] = E1 * a[q] + E3 * c[q] + E4 * d[q] + E5 * e[q] + E6 * g[q];
+                terms[q] = E1 * a[q] + E3 * c[q] + E4 * d[q] + E5 * e[q] + E6 * g[q];
             }
             double inverseBound = 1 / s.blowUpBound();
             for (int q = lo; q < hi; q++) {
                 double yi = yl[q];
                 double sk = atol + rtol * Math.max(Math.abs(yf[q]), Math.abs(yi));
-                double w = h * (work[q] + E7 * z[q]) / sk;
-                work[q] = w * w;
+                double w = h * (terms[q] + E7 * z[q]) / sk;
+                terms[q] = w * w;
                 double r = yi * inverseBound;
                 size[q] = r * r;
             }
-            blockSums(work, size, lo, hi);
+            blockSums(terms, size, lo, hi);
             squares += sumA;
             // Σ (y/bound)² <= 1/4 means every |y| is below the bound (and finite): the exact maximum, a slower
             // reduction, is only needed when some value might be out of bounds or not finite.
@@ -233,19 +227,12 @@ final class LatticeTile {
             DormandPrinceDense dense = s.dense();
             if (dense != null) {
                 for (int q = lo; q < hi; q++) {
-                    int i = flat + q - lo;
-                    double yDiff = yl[q] - yf[q];
-                    double bSpl = h * a[q] - yDiff;
-                    dense.r1[i] = yf[q];
-                    dense.r2[i] = yDiff;
-                    dense.r3[i] = bSpl;
-                    dense.r4[i] = yDiff - h * z[q] - bSpl;
-                    dense.r5[i] = h * (D1 * a[q] + D3 * c[q] + D4 * d[q] + D5 * e[q] + D6 * g[q] + D7 * z[q]);
+                    dense.set(flat + q - lo, yf[q], yl[q], h, a[q], c[q], d[q], e[q], g[q], z[q]);
                 }
             }
         }
         errorSquares = squares;
-        largest = big;
+        largestIfNearBound = big;
         stiffNumerator = num;
         stiffDenominator = den;
     }

@@ -14,8 +14,11 @@ import static org.phasewright.runtime.compile.IndexedModels.pow;
 import static org.phasewright.runtime.compile.IndexedModels.shift;
 import static org.phasewright.runtime.compile.IndexedModels.sin;
 
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Random;
+import java.util.function.Function;
 
 import org.junit.jupiter.api.Test;
 import org.phasewright.runtime.assemble.ModelAssembler;
@@ -68,6 +71,73 @@ class LatticeRatesTest {
     @Test
     void twoComponentLatticeWithTablesTimeAndIndexValuesEqualsWholeStateRates() {
         checkWindows(twoComponents(61));
+    }
+
+    /** One model per reason a model is not a lattice, each otherwise a plain ring (common practice, no source). */
+    @Test
+    void eachReasonAloneMakesAModelNotALattice() {
+        int n = 40;
+        IndexRange ring = new IndexRange("i", 1, n, true);
+        Map<String, Function<ModelAssembler, Family>> reasons = new LinkedHashMap<>();
+        reasons.put("derived family", a -> {
+            Family x = a.stateFamily("x", ring, c(1), null, null);
+            Family e = a.derivedFamily("e", ring, pow(at(x, idx("i")), 2), null);
+            a.familyRate(x, sub(at(e, shift("i", 1)), at(x, idx("i"))));
+            return x;
+        });
+        reasons.put("scalar derived quantity", a -> {
+            Family x = a.stateFamily("x", ring, c(1), null, null);
+            Variable s = a.derived("s", mul(c(2), c(3)), null);
+            a.familyRate(x, sub(s, at(x, idx("i"))));
+            return x;
+        });
+        reasons.put("reversed index", a -> {
+            Family x = a.stateFamily("x", ring, c(1), null, null);
+            a.familyRate(x, sub(at(x, sub(c(n + 1), idx("i"))), at(x, idx("i"))));
+            return x;
+        });
+        reasons.put("doubled index", a -> {
+            Family x = a.stateFamily("x", ring, c(1), null, null);
+            a.familyRate(x, sub(at(x, mul(c(2), idx("i"))), at(x, idx("i"))));
+            return x;
+        });
+        reasons.put("fixed element", a -> {
+            Family x = a.stateFamily("x", ring, c(1), null, null);
+            a.familyRate(x, sub(at(x, c(3)), at(x, idx("i"))));
+            return x;
+        });
+        reasons.put("table over another range", a -> {
+            Family w = a.parameterFamily("w", new IndexRange("j", 1, 2 * n, true), idx("j"), null, null);
+            Family x = a.stateFamily("x", ring, c(1), null, null);
+            a.familyRate(x, sub(at(w, idx("i")), at(x, idx("i"))));
+            return x;
+        });
+        reasons.put("families over shifted ranges", a -> {
+            Family x = a.stateFamily("x", ring, c(1), null, null);
+            Family y = a.stateFamily("y", new IndexRange("i", 0, n - 1, true), c(1), null, null);
+            a.familyRate(x, at(x, idx("i")));
+            a.familyRate(y, at(y, idx("i")));
+            return x;
+        });
+        reasons.put("a bounded family", a -> {
+            Family x = a.stateFamily("x", ring, c(1), null, null);
+            Family y = a.stateFamily("y", new IndexRange("i", 1, n, false), c(1), null, null);
+            a.familyRate(x, at(x, idx("i")));
+            a.familyRate(y, at(y, shift("i", 1)));
+            return x;
+        });
+        reasons.forEach((reason, build) -> {
+            ModelAssembler a = new ModelAssembler("not", null, new TimeAxis("t", null));
+            build.apply(a);
+            DynamicalModel model = a.build(List.of(), List.of());
+            assertNull(LatticeShape.of(model), reason);
+            assertNull(ModelCompiler.compile(model).lattice(), reason);
+        });
+        // and the plain ring that each of them changes is one
+        ModelAssembler a = new ModelAssembler("plain", null, new TimeAxis("t", null));
+        Family x = a.stateFamily("x", ring, c(1), null, null);
+        a.familyRate(x, sub(at(x, shift("i", 1)), at(x, idx("i"))));
+        assertNotNull(LatticeShape.of(a.build(List.of(), List.of())));
     }
 
     /** Rates of every cell of windows placed across the wrap-around, compared with the whole-state rates. */

@@ -121,7 +121,7 @@ class DormandPrince853Test {
     @Test
     void explicitMethodsReportStiffnessWithTheTime() {
         // Robertson's chemical kinetics (Robertson 1966; HNW II, Sec. IV.1, eq. (1.4)) turns stiff after the
-        // initial transient: Hairer's stiffness test (HNW I, Sec. IV.2; codes DOPRI5/DOP853) must flag it.
+        // initial transient: Hairer's stiffness test (HNW II, Sec. IV.2, from memory; codes DOPRI5/DOP853) must flag it.
         VectorField robertson = field(3, (t, y, d) -> {
             d[0] = -0.04 * y[0] + 1e4 * y[1] * y[2];
             d[2] = 3e7 * y[1] * y[1];

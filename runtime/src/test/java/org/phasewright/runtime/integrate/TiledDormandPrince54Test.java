@@ -267,7 +267,7 @@ class TiledDormandPrince54Test {
     void tilesFromOneCellToMoreThanTheRingAgreeWithWholeStateMethod() {
         // Lorenz (1996) ring reads 2 cells below and 1 above, so a window holds the tile and 18 halo cells. With 37
         // cells, tiles of 1 and 5 cells (many tiles, partial last one), 37 and 100 (one tile whose window wraps
-        // around the ring); with 7 cells the window (7 + 18) wraps more than three times. Reference: DormandPrince54.
+        // around the ring); with 7 cells the window (7 + 18) wraps around three times. Reference: DormandPrince54.
         IntegratorSettings s = tolerances(1e-9, 1e-9);
         for (int cells : new int[] {37, 7}) {
             CompiledModel m = compile(LatticeModels.lorenz96(cells, 8, true));
@@ -457,7 +457,7 @@ class TiledDormandPrince54Test {
     @Test
     void stiffLatticeIsReportedStiffWhereTheWholeStateMethodReportsIt() {
         // Robertson's kinetics (Robertson 1966; HNW II, Sec. IV.1, eq. (1.4)) turns stiff after its initial
-        // transient, and DOPRI5's stiffness test (HNW I, Sec. IV.2: tested every 1000 accepted steps, 15
+        // transient, and DOPRI5's stiffness test (HNW II, Sec. IV.2, from memory: tested every 1000 accepted steps, 15
         // confirmations; from memory) flags it (as DormandPrince853Test checks for one cell). Reference: the
         // whole-state method's report on the same three-family ring.
         CompiledModel m = compile(robertsonRing(100));
@@ -481,5 +481,103 @@ class TiledDormandPrince54Test {
             start += y0[k];
         }
         assertEquals(start, total, 1e-8);
+    }
+
+    // ---------------------------------------------------------------- one-sided stencils, tables, threads, failures
+
+    /**
+     * Upwind advection dx_i/dt = -v (x_i - x_{i-1}) (reads only below: reach above 0) and its mirror (reads only
+     * above: reach below 0), with a table of cell speeds v[i+1] read one cell up. Reference: DormandPrince54.
+     */
+    @Test
+    void oneSidedStencilsAndParameterTablesAgreeWithWholeStateMethod() {
+        for (int direction : new int[] {-1, 1}) {
+            ModelAssembler a = new ModelAssembler("advection", null, new TimeAxis("t", null));
+            IndexRange range = new IndexRange("i", 1, 300, true);
+            Family v = a.parameterFamily("v", range, add(c(1), mul(c(0.5), call(MathFunction.SIN, i()))), null,
+                    null);
+            Family x = a.stateFamily("x", range, call(MathFunction.COS, mul(c(2 * Math.PI * 3 / 300), i())), null,
+                    null);
+            a.familyRate(x, mul(mul(c(-1), at(v, 1)), direction < 0 ? sub(at(x, 0), at(x, -1))
+                    : sub(at(x, 1), at(x, 0))));
+            CompiledModel m = compile(a.build(List.of(), List.of()));
+            assertEquals(direction < 0 ? 1 : 0, m.lattice().reachBelow());
+            assertEquals(direction < 0 ? 0 : 1, m.lattice().reachAbove());
+            IntegratorSettings s = tolerances(1e-9, 1e-9);
+            IntegrationOutcome reference = whole(m).integrate(0, m.initialState(), 3, s, null);
+            IntegrationOutcome outcome = tiled(m, 2, 37).integrate(0, m.initialState(), 3, s, null);
+            assertSameCounts(reference, outcome);
+            assertTrue(maxDifference(reference.state(), outcome.state()) < 1e-10);
+        }
+    }
+
+    /** Helper threads live for one integration only (common practice for per-call worker threads, no source). */
+    @Test
+    void noTileThreadOutlivesItsIntegration() {
+        CompiledModel m = compile(diffusionRing(500, 3, 50));
+        tiled(m, 3, TILE).integrate(0, m.initialState(), 0.5, tolerances(1e-8, 1e-8), null);
+        assertEquals(0, tileThreads());
+    }
+
+    /**
+     * A failure in any worker's share reaches the caller as the same exception whatever the number of workers, no
+     * helper keeps running, and the instance integrates correctly afterwards (common practice, no source).
+     */
+    @Test
+    void aFailingShareFailsTheIntegrationAndLeavesNothingBehind() {
+        CompiledModel m = compile(diffusionRing(500, 3, 50));
+        LatticeRates real = m.lattice();
+        boolean[] armed = {true};
+        boolean[] upper = {true}; // fail in a tile of the upper half (a helper's share) or the lower (the caller's)
+        LatticeRates failing = new LatticeRates() {
+            @Override
+            public int cells() {
+                return real.cells();
+            }
+
+            @Override
+            public int components() {
+                return real.components();
+            }
+
+            @Override
+            public int reachBelow() {
+                return real.reachBelow();
+            }
+
+            @Override
+            public int reachAbove() {
+                return real.reachAbove();
+            }
+
+            @Override
+            public void rates(double t, double[][] in, double[] p, double[][] out, long first, int from, int to) {
+                if (armed[0] && t > 0.1 && (upper[0] ? first > 300 : first < 100)) {
+                    throw new ArithmeticException("cell " + first);
+                }
+                real.rates(t, in, p, out, first, from, to);
+            }
+        };
+        IntegratorSettings s = tolerances(1e-8, 1e-8);
+        double[] expected = whole(m).integrate(0, m.initialState(), 0.5, s, null).state();
+        for (int run = 0; run < 4; run++) {
+            int workers = run % 2 == 0 ? 1 : 3;
+            upper[0] = run < 2;
+            armed[0] = true;
+            TiledDormandPrince54 integrator = new TiledDormandPrince54(m.field(), failing, m.parameters(), workers,
+                    TILE);
+            ArithmeticException e = org.junit.jupiter.api.Assertions.assertThrows(ArithmeticException.class,
+                    () -> integrator.integrate(0, m.initialState(), 0.5, s, null));
+            assertTrue(e.getMessage().startsWith("cell "));
+            assertEquals(0, tileThreads(), "helpers stopped after the failure");
+            armed[0] = false;
+            double[] after = integrator.integrate(0, m.initialState(), 0.5, s, null).state();
+            assertTrue(maxDifference(expected, after) < 1e-12, "the same instance works afterwards");
+        }
+    }
+
+    private static long tileThreads() {
+        return Thread.getAllStackTraces().keySet().stream()
+                .filter(t -> t.getName().startsWith("phasewright-tiles-") && t.isAlive()).count();
     }
 }

@@ -30,4 +30,12 @@ class IntegratorChoiceTest {
         assertInstanceOf(DormandPrince54.class,
                 IntegratorChoice.create(IntegrationMethod.EXPLICIT, bounded, bounded.parameters()));
     }
+
+    @Test
+    void ensemblesAskForOneWorkerAndGetTilesForLargeLattices() {
+        CompiledModel ring = ModelCompiler.compile(LatticeModels.lorenz96(ExplicitMethod.TILED_FROM_CELLS, 8, true));
+        assertInstanceOf(TiledDormandPrince54.class,
+                ExplicitMethod.create(ring.field(), ring.lattice(), ring.parameters(), 1));
+        assertInstanceOf(DormandPrince54.class, ExplicitMethod.create(ring.field(), null, ring.parameters(), 1));
+    }
 }

@@ -14,14 +14,20 @@ import org.phasewright.runtime.model.Basins;
 import org.phasewright.runtime.symbolic.ModelEvaluationException;
 
 /**
- * Runs one {@link Basins} request: the equilibria are found once, as an equilibrium search would, then every start
- * of the grid runs on the ensemble executor and is labelled by the equilibrium it settles on.
+ * Runs one {@link Basins} request: the equilibria are those of the study's equilibrium search before it, or found
+ * here as such a search would, then every start of the grid runs on the ensemble executor and is labelled by the
+ * equilibrium it settles on.
  */
 final class BasinsRunner {
     private BasinsRunner() {
     }
 
-    static BasinsResult run(CompiledModel model, Basins request, RunSettings settings, Budget budget) {
+    /**
+     * @param earlier the study's latest completed equilibrium search before this request, whose equilibria label
+     *                the basins (the same names as in its report); null to search here
+     */
+    static BasinsResult run(CompiledModel model, Basins request, RunSettings settings, Budget budget,
+            EquilibriumResult earlier) {
         EnsembleGrid grid;
         try {
             grid = EnsembleGrid.of(request.first(), request.second(), request.endTime(), request.tolerance(),
@@ -32,7 +38,8 @@ final class BasinsRunner {
         }
         Axis first = grid.first(), second = grid.second();
         double endTime = grid.endTime();
-        EquilibriumResult search = EquilibriumSearchRunner.run(model, null, settings, budget);
+        EquilibriumResult search = earlier != null ? earlier : EquilibriumSearchRunner.run(model, null, settings,
+                budget);
         if (search.status() == Status.FAILED) {
             return new BasinsResult(first, second, endTime, null, null, null, Status.FAILED, search.outcome(),
                     "no equilibria to label the basins by: " + search.message());

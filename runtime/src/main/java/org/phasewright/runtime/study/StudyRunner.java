@@ -17,7 +17,8 @@ import org.phasewright.runtime.model.Study;
 
 /**
  * Executes the analyses of a study in order. Numerical trouble becomes a result with a named outcome and a message;
- * an equilibrium search seeds Newton's method from the latest trajectory of the same study when there is one.
+ * an equilibrium search seeds Newton's method from the latest trajectory of the same study when there is one, and
+ * basins are labelled by the equilibria of the latest completed search before them.
  */
 public final class StudyRunner {
     private StudyRunner() {
@@ -27,6 +28,7 @@ public final class StudyRunner {
         Budget budget = Budget.start(settings);
         List<AnalysisResult> results = new ArrayList<>();
         Trajectory latest = null;
+        EquilibriumResult equilibria = null; // the latest completed search, which labels later basins
         for (Analysis analysis : study.analyses()) {
             AnalysisResult result;
             if (budget.cancelled().getAsBoolean() || budget.expired()) {
@@ -41,7 +43,7 @@ public final class StudyRunner {
                         case EquilibriumContinuation c -> ContinuationRunner.run(model, c, settings, budget);
                         case ParameterSweep w -> SweepRunner.run(model, w, settings, budget);
                         case LyapunovMap m -> LyapunovMapRunner.run(model, m, settings, budget);
-                        case Basins b -> BasinsRunner.run(model, b, settings, budget);
+                        case Basins b -> BasinsRunner.run(model, b, settings, budget, equilibria);
                     };
                 } catch (RuntimeException e) { // a bug must not surface as a stack trace in a user's terminal
                     result = failed(analysis, "internal error: " + e);
@@ -50,6 +52,9 @@ public final class StudyRunner {
             if (result instanceof SimulationResult s && s.trajectory() != null && s.trajectory().size() > 0
                     && s.trajectory().kept() == null) { // a reduced trajectory has too few columns to seed Newton
                 latest = s.trajectory();
+            }
+            if (result instanceof EquilibriumResult e && e.status() == Status.COMPLETED && !e.equilibria().isEmpty()) {
+                equilibria = e;
             }
             results.add(result);
         }

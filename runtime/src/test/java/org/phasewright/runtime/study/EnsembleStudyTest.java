@@ -1,8 +1,10 @@
 package org.phasewright.runtime.study;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.phasewright.runtime.TestModels.c;
+import static org.phasewright.runtime.TestModels.equilibria;
 import static org.phasewright.runtime.TestModels.param;
 import static org.phasewright.runtime.TestModels.state;
 import static org.phasewright.runtime.TestModels.study;
@@ -61,6 +63,21 @@ class EnsembleStudyTest {
         }
         ReportWriter.writeAll(StudyRunner.run(m, s, RunSettings.DEFAULT), dir);
         assertEquals(4, Files.readAllLines(dir.resolve("basins.csv")).size());
+    }
+
+    @Test
+    void basinsAfterAnEquilibriumSearchLabelByItsEquilibria() {
+        // the study's own search names the equilibria in its report; basins after it use that set, not a new search
+        Study s = study("wells", equilibria(), new Basins(new GridAxis(state(0, "x"), c(-1.5), c(1.5), 3),
+                new GridAxis(state(1, "v"), c(0), c(0), 1), c(60), null));
+        CompiledModel m = ModelCompiler.compile(org.phasewright.runtime.ensemble.EnsembleModels.duffing(0.5,
+                s));
+        List<AnalysisResult> results = StudyRunner.run(m, s, RunSettings.DEFAULT).results();
+        EquilibriumResult search = (EquilibriumResult) results.get(0);
+        BasinsResult basins = (BasinsResult) results.get(1);
+        assertEquals(Status.COMPLETED, basins.status(), basins.message());
+        assertSame(search.equilibria(), basins.equilibria());
+        assertEquals(3, basins.equilibria().size()); // (−1, 0), (0, 0), (1, 0): closed form
     }
 
     @Test

@@ -125,6 +125,33 @@ class LargeModelOutputTest {
         assertTrue(SectionRunner.largeModelCrossings(1_000_000) >= 10);
     }
 
+    /**
+     * A ring large enough for the tiled explicit method: the study's samples (dense output between steps) and end
+     * state agree with the same study on the interpreter, which has no window rates and runs the whole-state method
+     * (reference: DormandPrince54, itself checked against DOPRI5 and closed forms).
+     */
+    @Test
+    void largeRingsRunTileByTileWithTheWholeStateResults() {
+        int n = org.phasewright.runtime.integrate.ExplicitMethod.TILED_FROM_CELLS + 1000;
+        DynamicalModel ring = ring(n);
+        CompiledModel tiled = ModelCompiler.compile(ring);
+        CompiledModel whole = ModelCompiler.interpret(ring);
+        assertNotNull(tiled.lattice());
+        assertNull(whole.lattice());
+        SimulationResult a = StudyRunner.runAll(tiled, RunSettings.DEFAULT).get(0).simulations().get(0);
+        SimulationResult b = StudyRunner.runAll(whole, RunSettings.DEFAULT).get(0).simulations().get(0);
+        assertEquals(Status.COMPLETED, a.status(), a.message());
+        assertEquals(b.integration().acceptedSteps(), a.integration().acceptedSteps());
+        double[] ea = a.integration().state(), eb = b.integration().state();
+        for (int i = 0; i < n; i++) {
+            assertEquals(eb[i], ea[i], 1e-9, "cell " + (i + 1));
+        }
+        assertEquals(b.trajectory().size(), a.trajectory().size());
+        for (int k = 0; k < a.trajectory().size(); k += 97) {
+            assertArrayEquals(b.trajectory().stateRow(k), a.trajectory().stateRow(k), 1e-9, "sample " + k);
+        }
+    }
+
     @Test
     void smallModelsKeepEveryColumn() {
         CompiledModel model = ModelCompiler.compile(ring(40));

@@ -2,7 +2,6 @@ package org.phasewright.runtime.integrate;
 
 import static org.phasewright.runtime.integrate.DormandPrince54.STIFF_BOUNDARY;
 
-
 import org.phasewright.runtime.compile.LatticeRates;
 import org.phasewright.runtime.compile.VectorField;
 

@@ -15,6 +15,7 @@ import org.phasewright.runtime.model.StateVariable;
 import org.phasewright.runtime.report.TextSummary;
 import org.phasewright.runtime.study.AnalysisResult;
 import org.phasewright.runtime.study.EquilibriumResult;
+import org.phasewright.runtime.study.ReducedOutput;
 import org.phasewright.runtime.study.LyapunovResult;
 import org.phasewright.runtime.study.SectionResult;
 import org.phasewright.runtime.study.SimulationResult;
@@ -219,22 +220,39 @@ final class HtmlReport {
                 h.append("<p>None found: ").append(e(r.message())).append("</p>\n");
                 continue;
             }
+            // large models: the first few coordinates, as in summary.txt; every one is in the CSV files
+            List<String> names = study.stateNames();
+            int shown = Math.min(names.size(), ReducedOutput.KEPT);
+            boolean cut = shown < names.size();
             h.append("<table>\n<tr><th>name</th>");
-            for (String s : study.stateNames()) {
+            for (String s : names.subList(0, shown)) {
                 h.append("<th>").append(e(s)).append("</th>");
+            }
+            if (cut) {
+                h.append("<th>…</th>");
             }
             h.append("<th>eigenvalues</th><th>type</th></tr>\n");
             for (Equilibrium q : r.equilibria()) {
                 Charts.Stability kind = Charts.Stability.of(q);
                 h.append("<tr><td><span class=\"marker ").append(kind.word()).append("\" title=\"")
                         .append(e(kind.word())).append("\"></span>").append(e(q.name())).append("</td>");
-                for (double c : q.coordinates()) {
-                    h.append("<td class=\"num\">").append(e(Formats.number(c))).append("</td>");
+                double[] coordinates = q.coordinates();
+                for (int i = 0; i < shown; i++) {
+                    h.append("<td class=\"num\">").append(e(Formats.number(coordinates[i]))).append("</td>");
+                }
+                if (cut) {
+                    h.append("<td>…</td>");
                 }
                 h.append("<td class=\"num\">").append(e(eigenvalues(q))).append("</td><td>").append(e(q.type()))
                         .append("</td></tr>\n");
             }
             h.append("</table>\n");
+            if (cut) {
+                h.append("<p>The first ").append(shown).append(" of ").append(names.size())
+                        .append(" states; every coordinate is in ")
+                        .append(ReducedOutput.reduced(names.size()) ? "equilibria-states.csv" : "equilibria.csv")
+                        .append(".</p>\n");
+            }
         }
         h.append("<p class=\"lede\"><span class=\"marker stable\"></span>stable (every eigenvalue has negative real "
                 + "part) &nbsp; <span class=\"marker unstable\"></span>unstable &nbsp; "

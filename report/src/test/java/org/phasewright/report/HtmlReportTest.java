@@ -20,6 +20,9 @@ import org.phasewright.runtime.model.DynamicalModel;
 import org.phasewright.runtime.model.Parameter;
 import org.phasewright.runtime.model.StateVariable;
 import org.phasewright.runtime.model.TimeAxis;
+import org.phasewright.runtime.study.EquilibriumResult;
+import org.phasewright.runtime.study.Status;
+import org.phasewright.runtime.study.StudyResult;
 
 import com.google.gson.JsonParser;
 
@@ -94,5 +97,26 @@ class HtmlReportTest {
         assertEquals("&lt;a href=&quot;x&quot; title=&#39;y&#39;&gt;&amp;", Html.escape("<a href=\"x\" title='y'>&"));
         assertEquals("a\uFFFDb", Html.escape("a\u0000b"));
         assertEquals("\uFFFD", Html.escape("\uD800"));
+    }
+
+    /** Equilibria of a model with many states show the first 16 coordinates, as summary.txt does. */
+    @Test
+    void equilibriaOfLargeModelsShowTheFirstCoordinatesOnly() throws Exception {
+        int n = 1500;
+        List<String> names = new java.util.ArrayList<>();
+        double[] at = new double[n];
+        for (int i = 0; i < n; i++) {
+            names.add("x[" + (i + 1) + "]");
+            at[i] = 0.001 * i;
+        }
+        EquilibriumResult search = new EquilibriumResult(List.of(Fixtures.equilibrium("E1", at, new double[0],
+                new double[0])), null, Status.COMPLETED, "COMPLETED", "found 1 equilibrium");
+        StudyResult study = new StudyResult("ring", "eq", "t", names, List.of(), List.of(), new double[0],
+                List.of(search));
+        String html = html(StudyReport.render(study, Fixtures.context()));
+        assertTrue(html.contains("<th>x[16]</th>"), "the first 16 states are columns");
+        assertFalse(html.contains("<th>x[17]</th>"), "no more");
+        assertFalse(html.contains(">" + Formats.number(at[16]) + "<"), "nor their values");
+        assertTrue(html.contains("The first 16 of 1500 states; every coordinate is in equilibria-states.csv."));
     }
 }

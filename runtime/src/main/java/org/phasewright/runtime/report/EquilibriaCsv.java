@@ -5,11 +5,13 @@ import java.util.List;
 
 import org.phasewright.runtime.equilibria.Equilibrium;
 import org.phasewright.runtime.study.EquilibriumResult;
+import org.phasewright.runtime.study.ReducedOutput;
 
 /**
- * equilibria.csv: name, coordinates (one column per state), eigenvalue k as columns lambda{k}_re and lambda{k}_im
- * (sorted by real part, descending; none for equilibria too large to classify), type, and the stable, unstable and
- * centre dimensions.
+ * equilibria.csv: name, coordinates (one column per state; above {@link ReducedOutput#LIMIT} states the first
+ * {@link ReducedOutput#KEPT} and the mean and root mean square over all, with every coordinate in
+ * {@link EquilibriumStatesCsv}), eigenvalue k as columns lambda{k}_re and lambda{k}_im (sorted by real part,
+ * descending; none for equilibria too large to classify), type, and the stable, unstable and centre dimensions.
  */
 public final class EquilibriaCsv {
     private EquilibriaCsv() {
@@ -19,7 +21,12 @@ public final class EquilibriaCsv {
         StringBuilder out = new StringBuilder();
         List<String> header = new ArrayList<>();
         header.add("name");
-        header.addAll(stateNames);
+        boolean reduced = ReducedOutput.reduced(stateNames.size());
+        int shown = reduced ? ReducedOutput.KEPT : stateNames.size();
+        header.addAll(stateNames.subList(0, shown));
+        if (reduced) {
+            header.addAll(List.of(ReducedOutput.MEAN, ReducedOutput.RMS));
+        }
         // equilibria of large models are not classified and carry no eigenvalues: only columns some row fills
         int eigenvalues = result.equilibria().stream().mapToInt(e -> e.eigenvaluesReal().length).max().orElse(0);
         for (int k = 1; k <= eigenvalues; k++) {
@@ -32,8 +39,14 @@ public final class EquilibriaCsv {
             for (Equilibrium e : result.equilibria()) {
                 List<String> row = new ArrayList<>();
                 row.add(e.name());
-                for (double x : e.coordinates()) {
-                    row.add(Csv.number(x));
+                double[] x = e.coordinates();
+                for (int i = 0; i < shown; i++) {
+                    row.add(Csv.number(x[i]));
+                }
+                if (reduced) {
+                    for (double v : ReducedOutput.meanAndRms(x)) {
+                        row.add(Csv.number(v));
+                    }
                 }
                 double[] re = e.eigenvaluesReal();
                 double[] im = e.eigenvaluesImag();

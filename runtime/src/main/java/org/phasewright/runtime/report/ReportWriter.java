@@ -11,6 +11,7 @@ import org.phasewright.runtime.study.ContinuationResult;
 import org.phasewright.runtime.study.EquilibriumResult;
 import org.phasewright.runtime.study.LyapunovMapResult;
 import org.phasewright.runtime.study.LyapunovResult;
+import org.phasewright.runtime.study.ReducedOutput;
 import org.phasewright.runtime.study.SectionResult;
 import org.phasewright.runtime.study.SimulationResult;
 import org.phasewright.runtime.study.StudyResult;
@@ -18,12 +19,13 @@ import org.phasewright.runtime.study.SweepResult;
 
 /**
  * Writes every file of a study result into a folder: summary.txt, trajectory.csv for each simulation that produced
- * samples (and final-state.csv, one row per state, when the model has more states than the summary shows), equilibria.csv and equilibria.json for each search, section.csv (the crossings, same columns as a
- * trajectory) for each section, lyapunov.csv (running estimates) for each Lyapunov request,
- * branches.csv and branches.json for each continuation (and cycles.csv when it followed periodic orbits from Hopf
- * points), sweep.csv (local maxima) for each orbit diagram, lyapunov-map.csv for each Lyapunov map and basins.csv
- * for each basins request. The second simulation or search of a study gets files
- * named trajectory-2.csv, equilibria-2.csv, and so on.
+ * samples (and final-state.csv, one row per state, when the model has more states than the summary shows),
+ * equilibria.csv and equilibria.json for each search (and equilibria-states.csv, one row per state, when the model
+ * has more states than a row of equilibria.csv holds), section.csv (the crossings, same columns as a trajectory)
+ * for each section, lyapunov.csv (running estimates) for each Lyapunov request, branches.csv and branches.json for
+ * each continuation (and cycles.csv when it followed periodic orbits from Hopf points), sweep.csv (local maxima)
+ * for each orbit diagram, lyapunov-map.csv for each Lyapunov map and basins.csv for each basins request. The second
+ * simulation or search of a study gets files named trajectory-2.csv, equilibria-2.csv, and so on.
  */
 public final class ReportWriter {
     private ReportWriter() {
@@ -54,6 +56,11 @@ public final class ReportWriter {
                     Path csv = folder.resolve(name("equilibria", search, "csv"));
                     AtomicFiles.write(csv, EquilibriaCsv.render(study.stateNames(), e));
                     written.add(csv);
+                    if (ReducedOutput.reduced(study.stateNames().size()) && !e.equilibria().isEmpty()) {
+                        Path states = folder.resolve(name("equilibria-states", search, "csv"));
+                        AtomicFiles.write(states, out -> EquilibriumStatesCsv.write(study.stateNames(), e, out));
+                        written.add(states);
+                    }
                     Path json = folder.resolve(name("equilibria", search, "json"));
                     AtomicFiles.write(json, EquilibriaJson.render(study, e));
                     written.add(json);

@@ -116,6 +116,10 @@ public final class TextSummary {
             rows.add(row);
         }
         table(out, rows);
+        if (org.phasewright.runtime.study.ReducedOutput.reduced(study.stateNames().size())) {
+            out.append("(").append(study.stateNames().size())
+                    .append(" states; every coordinate in equilibria-states.csv)\n");
+        }
         SymmetrySummary.text(out, e.symmetry());
     }
 

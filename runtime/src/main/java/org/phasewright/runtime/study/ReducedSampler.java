@@ -18,9 +18,9 @@ import org.phasewright.runtime.integrate.StepObserver;
  */
 final class ReducedSampler implements StepObserver {
     /** Models with more states than this get reduced output. */
-    static final int LIMIT = 1000;
-    static final int KEPT = 16;
-    static final String MEAN = "mean(states)", RMS = "rms(states)";
+    static final int LIMIT = ReducedOutput.LIMIT;
+    static final int KEPT = ReducedOutput.KEPT;
+    static final String MEAN = ReducedOutput.MEAN, RMS = ReducedOutput.RMS;
 
     private final CompiledModel model;
     private final double[] p;
@@ -83,13 +83,9 @@ final class ReducedSampler implements StepObserver {
             dv.derived(t, u, p, derived);
             System.arraycopy(derived, 0, d, 0, keptDerived);
         }
-        double sum = 0, squares = 0;
-        for (double x : u) {
-            sum += x;
-            squares += x * x;
-        }
-        d[keptDerived] = sum / u.length;
-        d[keptDerived + 1] = Math.sqrt(squares / u.length);
+        double[] summary = ReducedOutput.meanAndRms(u);
+        d[keptDerived] = summary[0];
+        d[keptDerived + 1] = summary[1];
         states[filled] = row;
         derivedRows[filled] = d;
         filled++;

@@ -43,12 +43,13 @@ class LargeModelStudiesTest {
                 .allMatch(x -> Math.abs(x - 8) < 1e-9)), search.message());
         assertTrue(search.message().contains("without polynomial homotopy"), search.message());
         assertEquals("not classified: dimension 2000 > 200", search.equilibria().get(0).type());
-        // unclassified equilibria have no eigenvalue columns, and every row is as wide as the header (RFC 4180)
+        // unclassified equilibria have no eigenvalue columns, a large model's rows keep 16 states with their mean and
+        // rms (every coordinate goes to equilibria-states.csv), and every row is as wide as the header (RFC 4180)
         String[] lines = org.phasewright.runtime.report.EquilibriaCsv.render(result.stateNames(), search).split("\r?\n");
-        assertEquals(1 + 2000 + 4, lines[0].split(",", -1).length);
+        assertEquals(1 + 16 + 2 + 4, lines[0].split(",", -1).length);
         assertTrue(!lines[0].contains("lambda"), lines[0].substring(0, 80));
         for (int k = 1; k < lines.length; k++) {
-            assertEquals(1 + 2000 + 4, lines[k].split(",", -1).length);
+            assertEquals(1 + 16 + 2 + 4, lines[k].split(",", -1).length);
         }
 
         List<LyapunovResult> spectra = result.lyapunovSpectra();

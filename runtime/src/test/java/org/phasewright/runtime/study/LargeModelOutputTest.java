@@ -152,6 +152,41 @@ class LargeModelOutputTest {
         }
     }
 
+    /**
+     * A damped, driven ring dx_i/dt = 1 − x_i + (x_{i+1} − x_{i−1})/4 of 1500 cells has the single equilibrium
+     * x_i = 1 (closed form: the uniform state cancels the difference term). equilibria.csv keeps the first 16
+     * coordinates with their mean and rms; equilibria-states.csv has every one, one row per state.
+     */
+    @Test
+    void equilibriaOfLargeModelsKeepAFewColumnsAndListEveryCoordinateByRow(@TempDir Path folder) throws Exception {
+        int n = 1500;
+        ModelAssembler a = new ModelAssembler("damped", null, new TimeAxis("t", null));
+        Family x = a.stateFamily("x", new IndexRange("i", 1, n, true), new Constant(0.5), null, null);
+        a.familyRate(x, new Binary(BinaryOperator.ADD, new Binary(BinaryOperator.SUBTRACT, new Constant(1), at(x, 0)),
+                new Binary(BinaryOperator.MULTIPLY, new Constant(0.25),
+                        new Binary(BinaryOperator.SUBTRACT, at(x, 1), at(x, -1)))));
+        Study study = new Study("eq", List.of(new org.phasewright.runtime.model.EquilibriumSearch()));
+        CompiledModel model = ModelCompiler.compile(a.build(List.of(), List.of(study)));
+        StudyResult result = StudyRunner.runAll(model, RunSettings.DEFAULT).get(0);
+        EquilibriumResult search = (EquilibriumResult) result.results().get(0);
+        assertEquals(1, search.equilibria().size(), search.message());
+        List<Path> files = ReportWriter.writeAll(result, folder);
+        List<String> csv = Files.readAllLines(folder.resolve("equilibria.csv"));
+        List<String> header = List.of(csv.get(0).split(","));
+        assertEquals("x[16]", header.get(16));
+        assertEquals(List.of(ReducedSampler.MEAN, ReducedSampler.RMS), header.subList(17, 19));
+        String[] row = csv.get(1).split(",");
+        assertEquals(1.0, Double.parseDouble(row[17]), 1e-9, "mean");
+        assertEquals(1.0, Double.parseDouble(row[18]), 1e-9, "rms");
+        assertTrue(files.contains(folder.resolve("equilibria-states.csv")));
+        List<String> byState = Files.readAllLines(folder.resolve("equilibria-states.csv"));
+        assertEquals("state,E1", byState.get(0));
+        assertEquals(n + 1, byState.size());
+        assertEquals(1.0, Double.parseDouble(byState.get(n).split(",")[1]), 1e-9);
+        assertTrue(Files.readString(folder.resolve("summary.txt"))
+                .contains("(1500 states; every coordinate in equilibria-states.csv)"));
+    }
+
     @Test
     void smallModelsKeepEveryColumn() {
         CompiledModel model = ModelCompiler.compile(ring(40));

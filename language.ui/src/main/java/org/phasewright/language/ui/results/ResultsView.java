@@ -24,6 +24,7 @@ import org.eclipse.ui.IPartListener2;
 import org.eclipse.ui.IWorkbenchPartReference;
 import org.eclipse.ui.part.ViewPart;
 import org.phasewright.language.ui.builder.BuildEvents;
+import org.phasewright.runtime.study.ReducedOutput;
 
 /**
  * Our results view: the latest study of the last saved model — equilibria table (coordinates, eigenvalues, type,
@@ -228,10 +229,15 @@ public final class ResultsView extends ViewPart implements BuildEvents.Listener 
         return all;
     }
 
+    /** "(x1, x2, ...)"; for large models the first {@link ReducedOutput#KEPT} and the count, as summary.txt does. */
     static String coordinates(double[] values) {
+        int shown = Math.min(values.length, ReducedOutput.KEPT);
         StringBuilder text = new StringBuilder("(");
-        for (int i = 0; i < values.length; i++) {
+        for (int i = 0; i < shown; i++) {
             text.append(i == 0 ? "" : ", ").append(PlotPainter.format(values[i]));
+        }
+        if (shown < values.length) {
+            text.append(", ... of ").append(values.length).append(" states");
         }
         return text.append(')').toString();
     }

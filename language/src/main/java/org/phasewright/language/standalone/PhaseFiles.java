@@ -20,6 +20,8 @@ import org.eclipse.xtext.validation.IResourceValidator;
 import org.eclipse.xtext.validation.Issue;
 import org.phasewright.language.PhaseStandaloneSetup;
 import org.phasewright.language.phase.PhaseModel;
+import org.phasewright.language.text.LargeStackThreads;
+import org.phasewright.language.text.LineBreaks;
 import org.phasewright.language.validation.ExpressionDepth;
 
 import com.google.inject.Injector;
@@ -62,9 +64,6 @@ public final class PhaseFiles {
         return check(shown, URI.createFileURI(file.toAbsolutePath().toString()), text);
     }
 
-    /** Stack of the thread that parses and validates: the parser recurses several frames per nesting level. */
-    static final long PARSER_STACK_BYTES = 256L << 20;
-
     /**
      * Checks text as if it were the file {@code shown}; {@code uri} must end in {@code .phase}. Runs on a thread with
      * a large stack so that deeply nested text is reported by the validator's depth rule instead of overflowing the
@@ -72,16 +71,16 @@ public final class PhaseFiles {
      * parser library's line counting fails on text that ends in one).
      */
     public CheckedModel check(String shown, URI uri, String text) {
-        String normalized = text.indexOf('\r') < 0 ? text : text.replaceAll("\r(?!\n)", "\n");
+        String normalized = LineBreaks.loneCrAsLf(text);
         CheckedModel[] result = new CheckedModel[1];
         Throwable[] failure = new Throwable[1];
-        Thread worker = new Thread(null, () -> {
+        Thread worker = new LargeStackThreads("phase-check").newThread(() -> {
             try {
                 result[0] = checkHere(shown, uri, normalized);
             } catch (RuntimeException | Error e) {
                 failure[0] = e;
             }
-        }, "phase-check", PARSER_STACK_BYTES);
+        });
         worker.start();
         boolean interrupted = false;
         while (true) {

@@ -3,6 +3,7 @@ package org.phasewright.language.ide.server;
 import org.eclipse.lsp4j.TextDocumentContentChangeEvent;
 import org.eclipse.xtext.ide.server.Document;
 import org.eclipse.xtext.util.ITextRegion;
+import org.phasewright.language.text.LineBreaks;
 
 /**
  * An open document whose contents (what is parsed and what positions are counted in) have lone CRs read as LF

@@ -4,6 +4,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 
 import org.eclipse.xtext.ide.ExecutorServiceProvider;
+import org.phasewright.language.text.LargeStackThreads;
 
 import com.google.inject.Singleton;
 

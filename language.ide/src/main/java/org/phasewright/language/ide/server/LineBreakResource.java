@@ -6,6 +6,7 @@ import java.io.Reader;
 import java.io.StringReader;
 
 import org.eclipse.xtext.linking.lazy.LazyLinkingResource;
+import org.phasewright.language.text.LineBreaks;
 
 import com.google.common.io.CharStreams;
 

@@ -24,6 +24,7 @@ import org.eclipse.xtext.ide.server.BuildManager.Buildable;
 import org.eclipse.xtext.ide.server.LanguageServerImpl;
 import org.eclipse.xtext.ide.server.UriExtensions;
 import org.phasewright.language.standalone.StudyPipeline;
+import org.phasewright.language.text.LineBreaks;
 
 import com.google.inject.Inject;
 

@@ -6,6 +6,7 @@ import java.util.concurrent.Executors;
 import org.eclipse.xtext.ide.server.concurrent.AbstractRequest;
 import org.eclipse.xtext.ide.server.concurrent.RequestManager;
 import org.eclipse.xtext.service.OperationCanceledManager;
+import org.phasewright.language.text.LargeStackThreads;
 
 import com.google.inject.Inject;
 import com.google.inject.Singleton;

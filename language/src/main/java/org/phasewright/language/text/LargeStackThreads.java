@@ -1,16 +1,16 @@
-package org.phasewright.language.ide.server;
+package org.phasewright.language.text;
 
 import java.util.concurrent.ThreadFactory;
 import java.util.concurrent.atomic.AtomicInteger;
 
 /**
- * Daemon threads with a large stack, for the server's parsing and validation: the generated parser recurses several
- * frames per nesting level and overflowed a normal (1 MB) stack at about 500 nested parentheses. The size matches
- * what {@code phasewright check} parses on (see the language's {@code PhaseFiles}); the stack is only reserved, and
- * memory is used only as deep as a text actually nests.
+ * Daemon threads with a large stack for parsing and validation, used by {@code phasewright check} (PhaseFiles) and
+ * the language server alike: the generated parser recurses several frames per nesting level and overflowed a normal
+ * (1 MB) stack at about 500 nested parentheses. The stack is only reserved; memory is used only as deep as a text
+ * actually nests.
  */
 public final class LargeStackThreads implements ThreadFactory {
-    /** 256 MB, as the command line. */
+    /** 256 MB. */
     public static final long STACK_BYTES = 256L << 20;
 
     private final String prefix;

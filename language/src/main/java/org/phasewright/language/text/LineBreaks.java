@@ -1,9 +1,10 @@
-package org.phasewright.language.ide.server;
+package org.phasewright.language.text;
 
 /**
- * Line breaks as the command-line checker reads them: CR, LF and CRLF each end a line. A lone CR (old-Mac line
- * ends) becomes LF, which has the same length, so every offset stays valid while the parsing library and Xtext's
- * document positions, which count only LF, see the same lines as the client and as {@code phasewright check}.
+ * Line breaks as users' editors read them: CR, LF and CRLF each end a line. A lone CR (old-Mac line ends) becomes
+ * LF, which has the same length, so every offset stays valid while the parsing library and Xtext's document
+ * positions, which count only LF, see the same lines; {@code phasewright check} and the language server both read
+ * text through it.
  */
 public final class LineBreaks {
 

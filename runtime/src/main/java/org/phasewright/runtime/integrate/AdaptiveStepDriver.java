@@ -181,6 +181,24 @@ final class AdaptiveStepDriver {
         return null;
     }
 
+    /**
+     * The first step of an explicit method of the given order: the settings' initial step (at most hMax) or
+     * {@link #initialStep}, signed by the direction of integration.
+     */
+    double firstExplicitStep(IntegratorSettings settings, VectorField field, double[] p, double t, double[] y,
+            double[] f0, double[] yStage, double[] f1, double[] rtol, double[] atol, int order) {
+        return direction * (settings.initialStep() > 0 ? Math.min(settings.initialStep(), hMax)
+                : initialStep(field, p, t, y, f0, yStage, f1, rtol, atol, order));
+    }
+
+    /**
+     * True when a step of h from t would end within {@code slack}·h of tEnd or beyond it: the caller then steps to
+     * tEnd exactly (a last sliver much shorter than h would only waste an attempt).
+     */
+    boolean reachesEnd(double t, double h, double tEnd, double slack) {
+        return (t + slack * h - tEnd) * direction >= 0;
+    }
+
     /** The step after an accepted one: at most hMax, and no growth straight after a rejection. */
     double nextStep(double hNew, double h) {
         if (Math.abs(hNew) > hMax) {

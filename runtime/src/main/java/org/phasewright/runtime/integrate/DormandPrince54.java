@@ -79,9 +79,7 @@ public final class DormandPrince54 implements Integrator {
         double[] atol = s.absoluteTolerances(n);
         boolean uniformTolerances = s.componentRelativeTolerances() == null
                 && s.componentAbsoluteTolerances() == null;
-        double direction = b.direction;
-        double h = direction * (s.initialStep() > 0 ? Math.min(s.initialStep(), b.hMax)
-                : b.initialStep(field, p, t, y, k1, yStage, k2, rtol, atol, 5));
+        double h = b.firstExplicitStep(s, field, p, t, y, k1, yStage, k2, rtol, atol, 5);
         StepSizeControl control = control();
 
         while (true) {
@@ -90,7 +88,7 @@ public final class DormandPrince54 implements Integrator {
                 return budget;
             }
             boolean last = false;
-            if ((t + 1.01 * h - tEnd) * direction >= 0) {
+            if (b.reachesEnd(t, h, tEnd, 1.01)) {
                 h = tEnd - t;
                 last = true;
             }

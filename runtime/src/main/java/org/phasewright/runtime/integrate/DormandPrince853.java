@@ -236,9 +236,7 @@ public final class DormandPrince853 implements Integrator {
         double t = t0;
         double[] rtol = s.relativeTolerances(n);
         double[] atol = s.absoluteTolerances(n);
-        double direction = b.direction;
-        double h = direction * (s.initialStep() > 0 ? Math.min(s.initialStep(), b.hMax)
-                : b.initialStep(field, p, t, y, k0, yStage, k1, rtol, atol, 8));
+        double h = b.firstExplicitStep(s, field, p, t, y, k0, yStage, k1, rtol, atol, 8);
         StepSizeControl control = new StepSizeControl(EXPO, 0, SAFETY, FAC_MIN, FAC_MAX); // no PI term in DOP853
 
         while (true) {
@@ -247,7 +245,7 @@ public final class DormandPrince853 implements Integrator {
                 return budget;
             }
             boolean last = false;
-            if ((t + 1.01 * h - tEnd) * direction >= 0) {
+            if (b.reachesEnd(t, h, tEnd, 1.01)) {
                 h = tEnd - t;
                 last = true;
             }

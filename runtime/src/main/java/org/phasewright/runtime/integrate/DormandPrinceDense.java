@@ -10,14 +10,11 @@ final class DormandPrinceDense extends AdaptiveStepDriver.View {
             D4 = -10690763975.0 / 1880347072.0, D5 = 701980252875.0 / 199316789632.0,
             D6 = -1453857185.0 / 822651844.0, D7 = 69997945.0 / 29380423.0;
 
-    private double[] r1, r2, r3, r4, r5;
+    /** r[0..4][i]: component i's coefficients; one array of arrays, so two sets swap by one reference. */
+    private double[][] r;
 
     DormandPrinceDense(int n) {
-        r1 = new double[n];
-        r2 = new double[n];
-        r3 = new double[n];
-        r4 = new double[n];
-        r5 = new double[n];
+        r = new double[5][n];
     }
 
     /** Component i's coefficients from the step y0 → y1 of size h and its stages. */
@@ -25,36 +22,25 @@ final class DormandPrinceDense extends AdaptiveStepDriver.View {
             double k7) {
         double yDiff = y1 - y0;
         double bSpl = h * k1 - yDiff;
-        r1[i] = y0;
-        r2[i] = yDiff;
-        r3[i] = bSpl;
-        r4[i] = yDiff - h * k7 - bSpl;
-        r5[i] = h * (D1 * k1 + D3 * k3 + D4 * k4 + D5 * k5 + D6 * k6 + D7 * k7);
+        r[0][i] = y0;
+        r[1][i] = yDiff;
+        r[2][i] = bSpl;
+        r[3][i] = yDiff - h * k7 - bSpl;
+        r[4][i] = h * (D1 * k1 + D3 * k3 + D4 * k4 + D5 * k5 + D6 * k6 + D7 * k7);
     }
 
     /** Exchanges coefficients with {@code other}: a step's are prepared aside and become this one's on acceptance. */
     void swapCoefficients(DormandPrinceDense other) {
-        double[] a = r1;
-        r1 = other.r1;
-        other.r1 = a;
-        a = r2;
-        r2 = other.r2;
-        other.r2 = a;
-        a = r3;
-        r3 = other.r3;
-        other.r3 = a;
-        a = r4;
-        r4 = other.r4;
-        other.r4 = a;
-        a = r5;
-        r5 = other.r5;
-        other.r5 = a;
+        double[][] mine = r;
+        r = other.r;
+        other.r = mine;
     }
 
     @Override
     public void stateAt(double t, double[] out) {
         double theta = (t - tOld) / h;
         double theta1 = 1 - theta;
+        double[] r1 = r[0], r2 = r[1], r3 = r[2], r4 = r[3], r5 = r[4];
         for (int i = 0; i < r1.length; i++) {
             out[i] = r1[i] + theta * (r2[i] + theta1 * (r3[i] + theta * (r4[i] + theta1 * r5[i])));
         }

@@ -182,7 +182,7 @@ public final class Rodas4 implements Integrator {
                 return budget;
             }
             boolean last = false;
-            if ((t + 1.0001 * h - tEnd) * direction >= 0) {
+            if (b.reachesEnd(t, h, tEnd, 1.0001)) {
                 h = tEnd - t;
                 last = true;
             }

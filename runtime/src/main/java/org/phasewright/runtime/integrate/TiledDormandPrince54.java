@@ -103,9 +103,7 @@ public final class TiledDormandPrince54 implements Integrator {
         double t = t0;
         double[] rtol = s.relativeTolerances(n);
         double[] atol = s.absoluteTolerances(n);
-        double direction = b.direction;
-        double h = direction * (s.initialStep() > 0 ? Math.min(s.initialStep(), b.hMax)
-                : b.initialStep(field, p, t, y, k1, yNew, k7, rtol, atol, 5));
+        double h = b.firstExplicitStep(s, field, p, t, y, k1, yNew, k7, rtol, atol, 5);
         StepSizeControl control = DormandPrince54.control();
 
         while (true) {
@@ -114,7 +112,7 @@ public final class TiledDormandPrince54 implements Integrator {
                 return budget;
             }
             boolean last = false;
-            if ((t + 1.01 * h - tEnd) * direction >= 0) {
+            if (b.reachesEnd(t, h, tEnd, 1.01)) {
                 h = tEnd - t;
                 last = true;
             }

@@ -12,7 +12,7 @@ import java.util.Locale;
 import org.phasewright.runtime.assemble.ModelAssembler;
 import org.phasewright.runtime.compile.CompiledModel;
 import org.phasewright.runtime.compile.ModelCompiler;
-import org.phasewright.runtime.integrate.DormandPrince54;
+import org.phasewright.runtime.integrate.ExplicitMethod;
 import org.phasewright.runtime.integrate.IntegrationOutcome;
 import org.phasewright.runtime.integrate.Integrator;
 import org.phasewright.runtime.integrate.IntegratorSettings;
@@ -57,10 +57,8 @@ public final class RingBenchmark {
         IntegratorSettings settings = IntegratorSettings.DEFAULT.withTolerances(rtol, atol).withMaxSteps(100_000_000L);
         // what a study's explicit method runs: tile by tile on all processors for a lattice this large
         int workers = Runtime.getRuntime().availableProcessors();
-        Integrator integrator = model.lattice() != null
-                ? new TiledDormandPrince54(model.field(), model.lattice(), model.parameters(), workers)
-                : new DormandPrince54(model.field(), model.parameters());
-        String method = model.lattice() != null ? "tiled, " + workers + " workers" : "whole state";
+        Integrator integrator = ExplicitMethod.create(model, model.parameters(), workers);
+        String method = integrator instanceof TiledDormandPrince54 ? "tiled, " + workers + " workers" : "whole state";
         double[] u0 = model.initialState();
 
         start = System.nanoTime();

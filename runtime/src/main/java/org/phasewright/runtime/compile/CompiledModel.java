@@ -21,7 +21,9 @@ public final class CompiledModel {
     private final Backend backend;
     private final String note;
     private final String generatedSource;
-    private final LatticeRates lattice;
+    private final java.util.function.Supplier<LatticeRates> latticeCompiler; // null when there can be none
+    private volatile boolean latticeMade;
+    private volatile LatticeRates lattice;
 
     CompiledModel(DynamicalModel model, VectorField field, DerivedValues derivedValues, double[] parameters,
             double[] initialState, boolean autonomous, Backend backend, String note, String generatedSource) {
@@ -30,7 +32,7 @@ public final class CompiledModel {
 
     CompiledModel(DynamicalModel model, VectorField field, DerivedValues derivedValues, double[] parameters,
             double[] initialState, boolean autonomous, Backend backend, String note, String generatedSource,
-            LatticeRates lattice) {
+            java.util.function.Supplier<LatticeRates> latticeCompiler) {
         this.model = model;
         this.field = SparseJacobians.attach(model, field); // large or indexed models: sparse Jacobian too
         this.derivedValues = derivedValues;
@@ -40,14 +42,23 @@ public final class CompiledModel {
         this.backend = backend;
         this.note = note;
         this.generatedSource = generatedSource;
-        this.lattice = lattice;
+        this.latticeCompiler = latticeCompiler;
     }
 
     /**
      * The rates on windows of cells when the model is a lattice (see {@link LatticeRates}), for integrators that
-     * work tile by tile; null otherwise. Same values as {@link #field()}.
+     * work tile by tile; null otherwise. Same values as {@link #field()}. Generated and compiled on the first call,
+     * so models that never run tile by tile do not pay for it.
      */
     public LatticeRates lattice() {
+        if (!latticeMade) {
+            synchronized (this) {
+                if (!latticeMade) {
+                    lattice = latticeCompiler == null ? null : latticeCompiler.get();
+                    latticeMade = true;
+                }
+            }
+        }
         return lattice;
     }
 

@@ -65,7 +65,7 @@ public final class ModelCompiler {
         if (lazy) {
             LazyJacobianField field = new LazyJacobianField(model, (VectorField) instance, (DerivedValues) instance);
             return new CompiledModel(model, field, field, parameters, initial, autonomous(model),
-                    CompiledModel.Backend.GENERATED_CODE, null, source, lattice(model));
+                    CompiledModel.Backend.GENERATED_CODE, null, source, () -> lattice(model));
         }
         return new CompiledModel(model, (VectorField) instance, (DerivedValues) instance, parameters, initial,
                 autonomous(model), CompiledModel.Backend.GENERATED_CODE, null, source);

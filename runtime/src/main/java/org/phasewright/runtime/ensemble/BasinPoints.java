@@ -45,7 +45,7 @@ public record BasinPoints(ModelShape shape, double[] parameters, double[] initia
     @Override
     public BasinPoint compute(CompiledModel model, int point, long deadlineNanos, BooleanSupplier cancelled) {
         // one worker: the ensemble already runs many points at once
-        IntegrationOutcome o = ExplicitMethod.create(model.field(), model.lattice(), parameters, 1)
+        IntegrationOutcome o = ExplicitMethod.create(model, parameters, 1)
                 .integrate(0.0, start(point), endTime, integration.settings(deadlineNanos, cancelled), null);
         return new BasinPoint(o.completed() ? label(o.state()) : NONE, o.ending().name());
     }

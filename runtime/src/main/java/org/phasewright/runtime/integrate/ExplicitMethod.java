@@ -1,7 +1,7 @@
 package org.phasewright.runtime.integrate;
 
+import org.phasewright.runtime.compile.CompiledModel;
 import org.phasewright.runtime.compile.LatticeRates;
-import org.phasewright.runtime.compile.VectorField;
 
 /** The Dormand–Prince 5(4) integrator for a model: tile by tile for large cyclic lattices, else the whole state. */
 public final class ExplicitMethod {
@@ -12,13 +12,14 @@ public final class ExplicitMethod {
     }
 
     /**
-     * @param lattice the model's window rates, or null when it is not a lattice
      * @param workers threads for one integration's tiles: all processors for a single run, 1 inside an ensemble
      *                that already runs many integrations at once
      */
-    public static Integrator create(VectorField field, LatticeRates lattice, double[] parameters, int workers) {
+    public static Integrator create(CompiledModel model, double[] parameters, int workers) {
+        // a lattice has at least as many states as cells: smaller models never compile window rates
+        LatticeRates lattice = model.dimension() >= TILED_FROM_CELLS ? model.lattice() : null;
         return lattice != null && lattice.cells() >= TILED_FROM_CELLS
-                ? new TiledDormandPrince54(field, lattice, parameters, workers)
-                : new DormandPrince54(field, parameters);
+                ? new TiledDormandPrince54(model.field(), lattice, parameters, workers)
+                : new DormandPrince54(model.field(), parameters);
     }
 }

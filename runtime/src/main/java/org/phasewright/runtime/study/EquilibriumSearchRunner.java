@@ -120,7 +120,7 @@ final class EquilibriumSearchRunner {
                 .withBlowUpBound(settings.blowUpBound())
                 .withDeadline(budget.deadlineNanos())
                 .withCancellation(budget.cancelled());
-        ExplicitMethod.create(model.field(), model.lattice(), p, Runtime.getRuntime().availableProcessors())
+        ExplicitMethod.create(model, p, Runtime.getRuntime().availableProcessors())
                 .integrate(0.0, initial, 1e9, s, step -> {
             if (last.size() == keep) {
                 last.removeFirst();

@@ -14,8 +14,7 @@ final class IntegratorChoice {
 
     static Integrator create(IntegrationMethod method, CompiledModel model, double[] p) {
         return switch (method) {
-            case EXPLICIT -> ExplicitMethod.create(model.field(), model.lattice(), p,
-                    Runtime.getRuntime().availableProcessors());
+            case EXPLICIT -> ExplicitMethod.create(model, p, Runtime.getRuntime().availableProcessors());
             case HIGH_ORDER -> new DormandPrince853(model.field(), p);
             case STIFF -> new Rodas4(model.field(), p, model.autonomous());
         };

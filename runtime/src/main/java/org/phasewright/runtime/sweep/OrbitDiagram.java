@@ -75,7 +75,7 @@ public final class OrbitDiagram {
             }
         };
         // one worker: the ensemble already runs many columns at once
-        IntegrationOutcome outcome = ExplicitMethod.create(field, model.lattice(), p, 1).integrate(0.0, u0, endTime,
+        IntegrationOutcome outcome = ExplicitMethod.create(model, p, 1).integrate(0.0, u0, endTime,
                 settings, afterTransients);
         double[][] maxima = new double[n][];
         for (int i = 0; i < n; i++) {

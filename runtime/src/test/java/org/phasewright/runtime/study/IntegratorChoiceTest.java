@@ -34,8 +34,8 @@ class IntegratorChoiceTest {
     @Test
     void ensemblesAskForOneWorkerAndGetTilesForLargeLattices() {
         CompiledModel ring = ModelCompiler.compile(LatticeModels.lorenz96(ExplicitMethod.TILED_FROM_CELLS, 8, true));
-        assertInstanceOf(TiledDormandPrince54.class,
-                ExplicitMethod.create(ring.field(), ring.lattice(), ring.parameters(), 1));
-        assertInstanceOf(DormandPrince54.class, ExplicitMethod.create(ring.field(), null, ring.parameters(), 1));
+        assertInstanceOf(TiledDormandPrince54.class, ExplicitMethod.create(ring, ring.parameters(), 1));
+        CompiledModel interpreted = ModelCompiler.interpret(ring.model()); // no window rates
+        assertInstanceOf(DormandPrince54.class, ExplicitMethod.create(interpreted, ring.parameters(), 1));
     }
 }

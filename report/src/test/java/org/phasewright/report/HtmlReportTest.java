@@ -99,7 +99,7 @@ class HtmlReportTest {
         assertEquals("\uFFFD", Html.escape("\uD800"));
     }
 
-    /** Equilibria of a model with many states show the first 16 coordinates, as summary.txt does. */
+    /** Equilibria of a model with many states show the first 16 coordinates, as summary.txt does (our rule). */
     @Test
     void equilibriaOfLargeModelsShowTheFirstCoordinatesOnly() throws Exception {
         int n = 1500;

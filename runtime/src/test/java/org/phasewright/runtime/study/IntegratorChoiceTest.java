@@ -11,7 +11,10 @@ import org.phasewright.runtime.integrate.TiledDormandPrince54;
 import org.phasewright.runtime.linalg.LatticeModels;
 import org.phasewright.runtime.model.IntegrationMethod;
 
-/** The explicit method runs tile by tile only for cyclic lattices of at least {@link ExplicitMethod#TILED_FROM_CELLS} cells. */
+/**
+ * The explicit method runs tile by tile only for cyclic lattices of at least {@link ExplicitMethod#TILED_FROM_CELLS}
+ * cells (our own rule; no outside source).
+ */
 class IntegratorChoiceTest {
     @Test
     void largeCyclicRingRunsTileByTile() {

@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
 
-/** The coordinates cell of the results view: every value for small models, the first 16 for large ones. */
+/** The results view's coordinates cell: every value for small models, the first 16 for large ones (our rule). */
 class CoordinatesTextTest {
 
     @Test

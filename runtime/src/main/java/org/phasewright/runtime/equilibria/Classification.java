@@ -47,4 +47,36 @@ public record Classification(String type, int stableDimension, int unstableDimen
         }
         return new Classification(type, stable, unstable, centre);
     }
+
+    /**
+     * Classifies from the rightmost eigenvalues of an n-dimensional system (not all of them). With
+     * {@code allUnstable} the eigenvalues given include every one of positive real part, so the unstable and centre
+     * counts are exact; node or focus is not decided (that needs the rest). Without it every eigenvalue given may be
+     * followed by more unstable ones: the unstable count is a lower bound, and the type says so.
+     */
+    public static Classification ofRightmost(double[] re, double[] im, int n, boolean allUnstable, double tolerance) {
+        int unstable = 0, centre = 0;
+        for (int k = 0; k < re.length; k++) {
+            if (Double.isNaN(re[k]) || Double.isNaN(im[k])) {
+                return new Classification("unclassified", 0, 0, 0);
+            }
+            if (re[k] > tolerance) {
+                unstable++;
+            } else if (re[k] >= -tolerance) {
+                centre++;
+            }
+        }
+        if (!allUnstable) {
+            return new Classification("unstable, at least " + unstable + " unstable directions", 0, unstable, 0);
+        }
+        String type;
+        if (centre > 0) {
+            type = "non-hyperbolic";
+        } else if (unstable == 0) {
+            type = "stable";
+        } else {
+            type = "saddle with " + unstable + (unstable == 1 ? " unstable direction" : " unstable directions");
+        }
+        return new Classification(type, n - unstable - centre, unstable, centre);
+    }
 }

@@ -13,8 +13,8 @@ import org.phasewright.runtime.linalg.SparseMatrix;
  * Finds the equilibria f(x) = 0 reachable by Newton's method from a set of starts, removes duplicates, and
  * classifies each by the eigenvalues of the exact Jacobian. Only meaningful for autonomous models (evaluated at t = 0).
  * Fields that work sparse ({@link VectorField#large()}) take sparse Newton steps; above
- * {@link SparseJacobian#DENSE_LIMIT} states their equilibria are not classified (see
- * {@link LinearStability#notClassified}), below it the dense Jacobian is assembled from the sparse one.
+ * {@link SparseJacobian#DENSE_LIMIT} states their equilibria are classified from the sparse Jacobian (see
+ * {@link LinearStability#ofSparse}), below it the dense Jacobian is assembled from the sparse one.
  * Results are sorted by coordinates and named E1, E2, ...; the same model and starts give the same answer.
  */
 public final class EquilibriumFinder {
@@ -103,10 +103,15 @@ public final class EquilibriumFinder {
         order.sort(Comparator.comparing(i -> roots.get(i), EquilibriumFinder::lexicographic));
         List<Equilibrium> equilibria = new ArrayList<>();
         double[] jac = n > SparseJacobian.DENSE_LIMIT ? null : new double[n * n];
+        SparseJacobian sparse = jac == null ? field.sparseJacobian() : null;
         for (int k = 0; k < order.size(); k++) {
             double[] x = roots.get(order.get(k));
             LinearStability stability;
-            if (jac == null) { // n² entries and an n³ eigen-solver are out of reach: say so instead
+            if (sparse != null) { // n² entries and an n³ eigen-solver are out of reach: the sparse spectrum instead
+                SparseMatrix m = sparse.newMatrix();
+                sparse.values(0.0, x, parameters, m.values());
+                stability = LinearStability.ofSparse(m, settings.eigenTolerance());
+            } else if (jac == null) {
                 stability = LinearStability.notClassified(n);
             } else {
                 denseJacobian(x, jac);

@@ -5,6 +5,9 @@ import java.util.Comparator;
 
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.EigenDecomposition;
+import org.phasewright.runtime.linalg.BlockCirculantSpectrum;
+import org.phasewright.runtime.linalg.RightmostEigenvalues;
+import org.phasewright.runtime.linalg.SparseMatrix;
 
 /** Eigenvalues of a Jacobian, sorted by real part (descending), and the classification they imply. */
 public final class LinearStability {
@@ -36,11 +39,65 @@ public final class LinearStability {
             Arrays.fill(nan, Double.NaN);
             return new LinearStability(nan, nan.clone(), Classification.of(nan, nan, 0));
         }
+        return sorted(eig[0], eig[1], relativeTolerance * norm);
+    }
+
+    /**
+     * For a model too large for a dense eigen-solver and without a sparse Jacobian: no eigenvalues, and a type that
+     * says why, naming the limit ({@link org.phasewright.runtime.compile.SparseJacobian#DENSE_LIMIT}).
+     */
+    public static LinearStability notClassified(int n) {
+        return new LinearStability(new double[0], new double[0], new Classification("not classified: dimension "
+                + n + " > " + org.phasewright.runtime.compile.SparseJacobian.DENSE_LIMIT, 0, 0, 0));
+    }
+
+    /**
+     * For a large model, from its sparse Jacobian. A Jacobian that commutes with the cyclic shift of a lattice (a
+     * ring at a state that is the same in every cell) gets its whole spectrum from {@link BlockCirculantSpectrum}
+     * and the same classification as a dense one. Any other gets its rightmost eigenvalues from
+     * {@link RightmostEigenvalues}: then the unstable dimension is exact when a stable eigenvalue was reached, and a
+     * lower bound ("at least") when every eigenvalue found is unstable. Either way only the
+     * {@link RightmostEigenvalues#WANTED} rightmost eigenvalues are kept. Zero means below
+     * {@code relativeTolerance} times the Gershgorin bound of J (its largest absolute row sum; the Frobenius norm the
+     * dense case uses grows with the dimension).
+     */
+    public static LinearStability ofSparse(SparseMatrix j, double relativeTolerance) {
+        int n = j.dimension();
+        if (!j.allFinite()) {
+            double[] nan = {Double.NaN};
+            return new LinearStability(nan, nan.clone(), Classification.of(nan, nan, 0));
+        }
+        double scale = 0;
+        for (int i = 0; i < n; i++) {
+            double row = 0;
+            for (int k = j.pattern().rowStart(i); k < j.pattern().rowEnd(i); k++) {
+                row += Math.abs(j.values()[k]);
+            }
+            scale = Math.max(scale, row);
+        }
+        double tolerance = relativeTolerance * scale;
+        double[][] all = BlockCirculantSpectrum.of(j, tolerance);
+        if (all != null) {
+            LinearStability full = sorted(all[0], all[1], tolerance);
+            int keep = Math.min(n, RightmostEigenvalues.WANTED);
+            return new LinearStability(Arrays.copyOf(full.re, keep), Arrays.copyOf(full.im, keep),
+                    full.classification);
+        }
+        RightmostEigenvalues.Result r = RightmostEigenvalues.of(j);
+        if (r == null || r.real().length == 0) {
+            return new LinearStability(new double[0], new double[0], new Classification(
+                    "not classified: the rightmost of its " + n + " eigenvalues did not converge", 0, 0, 0));
+        }
+        return new LinearStability(r.real(), r.imaginary(), Classification.ofRightmost(r.real(), r.imaginary(), n,
+                r.allUnstable(), tolerance));
+    }
+
+    private static LinearStability sorted(double[] r, double[] m, double tolerance) {
+        int n = r.length;
         Integer[] order = new Integer[n];
         for (int i = 0; i < n; i++) {
             order[i] = i;
         }
-        double[] r = eig[0], m = eig[1];
         Arrays.sort(order, Comparator.<Integer>comparingDouble(i -> -r[i]).thenComparingDouble(i -> -m[i]));
         double[] re = new double[n];
         double[] im = new double[n];
@@ -48,17 +105,7 @@ public final class LinearStability {
             re[k] = r[order[k]];
             im[k] = m[order[k]];
         }
-        double tolerance = relativeTolerance * norm;
         return new LinearStability(re, im, Classification.of(re, im, tolerance));
-    }
-
-    /**
-     * For a model too large for a dense eigen-solver: no eigenvalues, and a type that says why, naming the limit
-     * ({@link org.phasewright.runtime.compile.SparseJacobian#DENSE_LIMIT}).
-     */
-    public static LinearStability notClassified(int n) {
-        return new LinearStability(new double[0], new double[0], new Classification("not classified: dimension "
-                + n + " > " + org.phasewright.runtime.compile.SparseJacobian.DENSE_LIMIT, 0, 0, 0));
     }
 
     /** {re, im}, or null if the QR iteration fails (reported as "unclassified"). */

@@ -27,7 +27,7 @@ public final class EquilibriaCsv {
         if (reduced) {
             header.addAll(List.of(ReducedOutput.MEAN, ReducedOutput.RMS));
         }
-        // equilibria of large models are not classified and carry no eigenvalues: only columns some row fills
+        // equilibria of large models carry only their rightmost eigenvalues (or none): only columns some row fills
         int eigenvalues = result.equilibria().stream().mapToInt(e -> e.eigenvaluesReal().length).max().orElse(0);
         for (int k = 1; k <= eigenvalues; k++) {
             header.add("lambda" + k + "_re");

@@ -15,6 +15,7 @@ import org.phasewright.runtime.equilibria.PolynomialRoots;
 import org.phasewright.runtime.equilibria.StartPoints;
 import org.phasewright.runtime.integrate.ExplicitMethod;
 import org.phasewright.runtime.integrate.IntegratorSettings;
+import org.phasewright.runtime.linalg.RightmostEigenvalues;
 import org.phasewright.runtime.symmetry.SymmetryAnalysis;
 import org.phasewright.runtime.symmetry.SymmetryReport;
 
@@ -61,7 +62,7 @@ final class EquilibriumSearchRunner {
     /**
      * A model above {@link SparseJacobian#DENSE_LIMIT} states: sparse Newton from the initial state, the origin and
      * a few late points of a short run; no polynomial homotopy (its start system has a root count exponential in
-     * the dimension) and no eigenvalues, both said in the message.
+     * the dimension) and only the rightmost eigenvalues, both said in the message.
      */
     private static EquilibriumResult large(CompiledModel model, double[] p, Trajectory trajectory, RunSettings settings,
             Budget budget) {
@@ -85,7 +86,9 @@ final class EquilibriumSearchRunner {
                 : Status.INCOMPLETE;
         String message = search.message() + "; a model of " + n + " states (more than "
                 + SparseJacobian.DENSE_LIMIT + ") is searched by sparse Newton from " + starts.points().size()
-                + " starts without polynomial homotopy, and its equilibria are not classified";
+                + " starts without polynomial homotopy; each equilibrium is classified by its rightmost eigenvalues from the"
+                + " sparse Jacobian (all eigenvalues when it is the same in every cell of a ring), and at most "
+                + RightmostEigenvalues.WANTED + " are listed";
         return new EquilibriumResult(search.equilibria(), search, status, search.ending().name(), message,
                 symmetry(model, search.equilibria()));
     }

@@ -42,14 +42,29 @@ class LargeModelStudiesTest {
         assertTrue(search.equilibria().stream().anyMatch(e -> java.util.Arrays.stream(e.coordinates())
                 .allMatch(x -> Math.abs(x - 8) < 1e-9)), search.message());
         assertTrue(search.message().contains("without polynomial homotopy"), search.message());
-        assertEquals("not classified: dimension 2000 > 200", search.equilibria().get(0).type());
-        // unclassified equilibria have no eigenvalue columns, a large model's rows keep 16 states with their mean and
-        // rms (every coordinate goes to equilibria-states.csv), and every row is as wide as the header (RFC 4180)
+        // the uniform state is classified from all 2000 eigenvalues of its circulant Jacobian: λ_k = -1 + F e^{iθ}
+        // - F e^{-2iθ}, θ = 2πk/N (DFT of the first row, Gray 2006, Section 3.1), unstable where Re λ_k > 0
+        Equilibrium uniform = search.equilibria().stream().filter(e -> java.util.Arrays.stream(e.coordinates())
+                .allMatch(x -> Math.abs(x - 8) < 1e-9)).findFirst().orElseThrow();
+        int growing = 0;
+        double rightmost = Double.NEGATIVE_INFINITY;
+        for (int k = 0; k < 2000; k++) {
+            double theta = 2 * Math.PI * k / 2000, re = -1 + 8 * (Math.cos(theta) - Math.cos(2 * theta));
+            growing += re > 0 ? 1 : 0;
+            rightmost = Math.max(rightmost, re);
+        }
+        assertEquals("saddle-focus with " + growing + " unstable directions", uniform.type());
+        assertEquals(growing, uniform.classification().unstableDimension());
+        assertEquals(2000 - growing, uniform.classification().stableDimension());
+        assertEquals(12, uniform.eigenvaluesReal().length);
+        assertEquals(rightmost, uniform.eigenvaluesReal()[0], 1e-9);
+        // a large model's rows keep 16 states with their mean and rms (every coordinate goes to
+        // equilibria-states.csv) and its 12 rightmost eigenvalues, and every row is as wide as the header (RFC 4180)
         String[] lines = org.phasewright.runtime.report.EquilibriaCsv.render(result.stateNames(), search).split("\r?\n");
-        assertEquals(1 + 16 + 2 + 4, lines[0].split(",", -1).length);
-        assertTrue(!lines[0].contains("lambda"), lines[0].substring(0, 80));
+        assertEquals(1 + 16 + 2 + 4 + 2 * 12, lines[0].split(",", -1).length);
+        assertTrue(lines[0].contains("lambda12_im") && !lines[0].contains("lambda13"), lines[0]);
         for (int k = 1; k < lines.length; k++) {
-            assertEquals(1 + 16 + 2 + 4, lines[k].split(",", -1).length);
+            assertEquals(1 + 16 + 2 + 4 + 2 * 12, lines[k].split(",", -1).length);
         }
 
         List<LyapunovResult> spectra = result.lyapunovSpectra();

@@ -1,0 +1,405 @@
+package org.phasewright.runtime.linalg;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Comparator;
+import java.util.List;
+
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.EigenDecomposition;
+import org.apache.commons.math3.linear.RealMatrix;
+
+/**
+ * The rightmost eigenvalues of a large sparse real matrix J, enough to decide the stability of an equilibrium
+ * without the n³ dense eigen-solver: Arnoldi with thick restarts on the Cayley transform
+ * C = (J − σI)⁻¹(J + σI) = I + 2σ(J − σI)⁻¹, which maps eigenvalues λ of J to μ = (λ + σ)/(λ − σ). For σ &gt; 0 the
+ * right half-plane goes outside the unit circle and the left half-plane inside it (Meerbergen, Spence &amp; Roose,
+ * BIT 34, 1994), so the eigenvalues of C of largest modulus are the unstable eigenvalues of J and, after them, the
+ * stable ones nearest the imaginary axis. With σ above the Gershgorin bound of J every λ maps to a finite μ and the
+ * eigenvalues of J far out in the left half-plane map near μ = 0, where Arnoldi leaves them alone.
+ * <p>
+ * The restart keeps an orthonormal basis of the wanted Ritz vectors as the start of the next Krylov decomposition
+ * (Stewart's Krylov–Schur restart, SIAM J. Matrix Anal. Appl. 23, 2001, without reordering a Schur form). One sparse
+ * LU factorisation of J − σI serves every product with C.
+ */
+public final class RightmostEigenvalues {
+    /** Eigenvalues sought (a complex pair may add one): enough to count a few unstable directions. */
+    public static final int WANTED = 12;
+    private static final int BASIS = 40;
+    /**
+     * Restarts allowed: 100, fewer for large n so that one classification stays near 2·10⁹ flops (a few seconds;
+     * each restart costs about 4·n·BASIS² for orthogonalisation plus BASIS sparse solves).
+     */
+    private static final int MAX_RESTARTS = 100;
+    private static final double WORK = 2e9;
+    /** A Ritz pair of C has converged when its residual is below this times |μ|. */
+    private static final double RESIDUAL = 1e-10;
+
+    /**
+     * The eigenvalues found, real parts largest first (a complex pair as +b then −b).
+     *
+     * @param converged    false when the wanted Ritz values did not all settle within the restart limit; the
+     *                     eigenvalues are then those that did
+     * @param allUnstable  true when the eigenvalues found include every eigenvalue of positive real part: some
+     *                     eigenvalue found is stable, and all others of J map to smaller |μ| still
+     * @param scale        the Gershgorin bound of J (max row sum of |J_ij|), the size the eigenvalues are measured by
+     */
+    public record Result(double[] real, double[] imaginary, boolean converged, boolean allUnstable, double scale) {
+    }
+
+    private RightmostEigenvalues() {
+    }
+
+    /** The rightmost eigenvalues of j; null when J − σI cannot be factored or J has entries that are not finite. */
+    public static Result of(SparseMatrix j) {
+        int n = j.dimension();
+        if (!j.allFinite()) {
+            return null;
+        }
+        double radius = gershgorinRadius(j);
+        if (radius == 0) { // the zero matrix: every eigenvalue is 0
+            return new Result(new double[Math.min(n, WANTED)], new double[Math.min(n, WANTED)], true, true, 0);
+        }
+        double sigma = 1.5 * radius; // above every |λ|, so J − σI is not singular
+        SparseMatrix shifted = shifted(j, sigma);
+        SparseLu lu = new SparseLu(shifted.pattern());
+        if (!lu.factor(shifted)) {
+            return null;
+        }
+        return new Arnoldi(n, lu, sigma, radius).run();
+    }
+
+    private static double gershgorinRadius(SparseMatrix j) {
+        SparsePattern p = j.pattern();
+        double radius = 0;
+        for (int i = 0; i < p.dimension(); i++) {
+            double row = 0;
+            for (int k = p.rowStart(i); k < p.rowEnd(i); k++) {
+                row += Math.abs(j.values()[k]);
+            }
+            radius = Math.max(radius, row);
+        }
+        return radius;
+    }
+
+    /** J − σI on J's pattern with the diagonal added. */
+    private static SparseMatrix shifted(SparseMatrix j, double sigma) {
+        SparsePattern w = j.pattern().withDiagonal();
+        SparseMatrix m = new SparseMatrix(w);
+        int[] slots = w.slotsOf(j.pattern());
+        for (int k = 0; k < slots.length; k++) {
+            m.values()[slots[k]] = j.values()[k];
+        }
+        for (int i = 0; i < w.dimension(); i++) {
+            m.values()[w.find(i, i)] -= sigma;
+        }
+        return m;
+    }
+
+    /** One run: the Krylov basis, its projected matrix and the restart loop. */
+    private static final class Arnoldi {
+        private final int n, m, wanted;
+        private final SparseLu lu;
+        private final double sigma, radius;
+        private final double[][] v; // basis vectors v[0..m], v[m] the residual direction
+        private final double[][] h; // (m + 1) × m projected matrix
+        private final double[] w, coefficients;
+
+        Arnoldi(int n, SparseLu lu, double sigma, double radius) {
+            this.n = n;
+            this.lu = lu;
+            this.sigma = sigma;
+            this.radius = radius;
+            this.m = Math.min(BASIS, n);
+            this.wanted = Math.min(WANTED, Math.max(1, m - 2 - m / 4));
+            v = new double[m + 1][];
+            h = new double[m + 1][m];
+            w = new double[n];
+            coefficients = new double[m + 1];
+        }
+
+        Result run() {
+            // a start with every component, the same on every run
+            double[] start = new double[n];
+            for (int i = 0; i < n; i++) {
+                start[i] = 1 + 0.5 * Math.sin(1.0 + i * 0.7548776662466927);
+            }
+            normalise(start);
+            v[0] = start;
+            int kept = 0;
+            List<Ritz> last = List.of();
+            int restarts = (int) Math.max(10, Math.min(MAX_RESTARTS, WORK / (4.0 * n * m * m)));
+            for (int restart = 0; restart <= restarts; restart++) {
+                int size = expand(kept);
+                List<Ritz> ritz = ritzPairs(size);
+                if (ritz == null) {
+                    break;
+                }
+                last = ritz;
+                int take = wantedCount(ritz);
+                boolean invariant = size < m || h[size][size - 1] == 0;
+                boolean done = invariant;
+                if (!done) {
+                    done = true;
+                    for (int r = 0; r < take; r++) {
+                        done &= ritz.get(r).converged;
+                    }
+                }
+                if (done || restart == restarts) {
+                    return result(ritz, take, done);
+                }
+                kept = restartWith(ritz, take, size);
+                if (kept == 0) {
+                    break;
+                }
+            }
+            return result(last, wantedCount(last), false);
+        }
+
+        /** Extends the decomposition from {@code kept} columns to m (fewer on an invariant subspace). */
+        private int expand(int kept) {
+            for (int col = kept; col < m; col++) {
+                System.arraycopy(v[col], 0, w, 0, n);
+                applyCayley(w);
+                double norm = orthogonalise(w, col + 1);
+                for (int r = 0; r <= col; r++) {
+                    h[r][col] = coefficients[r];
+                }
+                if (!(norm > 1e-13 * (1 + Math.abs(h[col][col])))) { // an invariant subspace: the Ritz values are exact
+                    h[col + 1][col] = 0;
+                    return col + 1;
+                }
+                h[col + 1][col] = norm;
+                double[] next = v[col + 1] == null ? new double[n] : v[col + 1];
+                for (int i = 0; i < n; i++) {
+                    next[i] = w[i] / norm;
+                }
+                v[col + 1] = next;
+            }
+            return m;
+        }
+
+        /** x ← C x = x + 2σ (J − σI)⁻¹ x. */
+        private void applyCayley(double[] x) {
+            double[] y = x.clone();
+            lu.solve(y);
+            double twoSigma = 2 * sigma;
+            for (int i = 0; i < n; i++) {
+                x[i] += twoSigma * y[i];
+            }
+        }
+
+        /**
+         * Removes from x its components along v[0..count) by classical Gram–Schmidt applied twice (enough for
+         * orthogonality to working precision, Giraud et al., Numer. Math. 101, 2005); the coefficients go to
+         * {@link #coefficients}. Returns |x| afterwards.
+         */
+        private double orthogonalise(double[] x, int count) {
+            Arrays.fill(coefficients, 0.0);
+            for (int pass = 0; pass < 2; pass++) {
+                for (int r = 0; r < count; r++) {
+                    double[] b = v[r];
+                    double dot = 0;
+                    for (int i = 0; i < n; i++) {
+                        dot += b[i] * x[i];
+                    }
+                    coefficients[r] += dot;
+                    for (int i = 0; i < n; i++) {
+                        x[i] -= dot * b[i];
+                    }
+                }
+            }
+            double s = 0;
+            for (double xi : x) {
+                s += xi * xi;
+            }
+            return Math.sqrt(s);
+        }
+
+        /** A Ritz value μ of C, the real basis of its vector in the projected space (one column, or two for a pair). */
+        private record Ritz(double re, double im, double[] vectorRe, double[] vectorIm, boolean converged) {
+            double modulus() {
+                return Math.hypot(re, im);
+            }
+        }
+
+        /** Ritz pairs of the size × size projected matrix, largest |μ| first; null if its eigen-solver fails. */
+        private List<Ritz> ritzPairs(int size) {
+            double[][] a = new double[size][size];
+            for (int r = 0; r < size; r++) {
+                System.arraycopy(h[r], 0, a[r], 0, size);
+            }
+            EigenDecomposition d;
+            try {
+                d = new EigenDecomposition(new Array2DRowRealMatrix(a, false));
+            } catch (RuntimeException e) {
+                return null;
+            }
+            double[] re = d.getRealEigenvalues(), im = d.getImagEigenvalues();
+            RealMatrix vectors = d.getV();
+            double tail = h[size][size - 1];
+            List<Ritz> out = new ArrayList<>();
+            for (int k = 0; k < size; k++) {
+                double[] x = vectors.getColumn(k), y = null;
+                if (im[k] != 0) {
+                    // a pair takes columns k, k + 1 (real and imaginary part of one eigenvector)
+                    if (k + 1 >= size) {
+                        return null;
+                    }
+                    y = vectors.getColumn(k + 1);
+                }
+                double lastSquared = x[size - 1] * x[size - 1] + (y == null ? 0 : y[size - 1] * y[size - 1]);
+                double normSquared = dot(x, x) + (y == null ? 0 : dot(y, y));
+                double residual = Math.abs(tail) * Math.sqrt(lastSquared / normSquared);
+                boolean converged = residual <= RESIDUAL * Math.max(Math.hypot(re[k], im[k]), 1e-3);
+                out.add(new Ritz(re[k], Math.abs(im[k]), x, y, converged));
+                if (y != null) {
+                    out.add(new Ritz(re[k], -Math.abs(im[k]), x, y, converged));
+                    k++;
+                }
+            }
+            out.sort(Comparator.comparingDouble(Ritz::modulus).reversed().thenComparing(r -> -r.im));
+            return out;
+        }
+
+        /** WANTED, plus one when the cut would split a complex pair. */
+        private int wantedCount(List<Ritz> ritz) {
+            int take = Math.min(wanted, ritz.size());
+            if (take < ritz.size() && take > 0 && ritz.get(take - 1).im > 0 && ritz.get(take).im < 0) {
+                take++;
+            }
+            return take;
+        }
+
+        /**
+         * Keeps the span of the first {@code take} Ritz vectors: an orthonormal basis Q of their real parts, V ← V Q,
+         * H ← QᵀHQ with the residual row h_{m+1,m} (last row of Q) below it, and the residual direction next.
+         */
+        private int restartWith(List<Ritz> ritz, int take, int size) {
+            List<double[]> columns = new ArrayList<>();
+            for (int r = 0; r < take; r++) {
+                Ritz z = ritz.get(r);
+                if (z.im < 0) {
+                    continue; // the pair's basis came with its +b member
+                }
+                columns.add(z.vectorRe.clone());
+                if (z.vectorIm != null) {
+                    columns.add(z.vectorIm.clone());
+                }
+            }
+            // modified Gram–Schmidt twice on the small vectors; drop any that vanish (a repeated vector)
+            List<double[]> q = new ArrayList<>();
+            for (double[] c : columns) {
+                for (int pass = 0; pass < 2; pass++) {
+                    for (double[] b : q) {
+                        double d = dot(b, c);
+                        for (int i = 0; i < size; i++) {
+                            c[i] -= d * b[i];
+                        }
+                    }
+                }
+                double norm = Math.sqrt(dot(c, c));
+                if (norm > 1e-10) {
+                    for (int i = 0; i < size; i++) {
+                        c[i] /= norm;
+                    }
+                    q.add(c);
+                }
+            }
+            int k = q.size();
+            if (k == 0 || k >= size) {
+                return 0;
+            }
+            // V ← V Q (row by row of the n-long vectors, one temporary row of k values)
+            double[] row = new double[k];
+            for (int i = 0; i < n; i++) {
+                for (int c = 0; c < k; c++) {
+                    double s = 0;
+                    double[] qc = q.get(c);
+                    for (int r = 0; r < size; r++) {
+                        s += v[r][i] * qc[r];
+                    }
+                    row[c] = s;
+                }
+                for (int c = 0; c < k; c++) {
+                    v[c][i] = row[c];
+                }
+            }
+            double tail = h[size][size - 1];
+            double[] residualDirection = v[size];
+            double[][] s = new double[k + 1][k];
+            for (int a = 0; a < k; a++) {
+                double[] hq = new double[size];
+                for (int r = 0; r < size; r++) {
+                    double t = 0;
+                    for (int c = 0; c < size; c++) {
+                        t += h[r][c] * q.get(a)[c];
+                    }
+                    hq[r] = t;
+                }
+                for (int b = 0; b < k; b++) {
+                    s[b][a] = dot(q.get(b), hq);
+                }
+                s[k][a] = tail * q.get(a)[size - 1];
+            }
+            for (double[] hr : h) {
+                Arrays.fill(hr, 0.0);
+            }
+            for (int r = 0; r <= k; r++) {
+                System.arraycopy(s[r], 0, h[r], 0, k);
+            }
+            // the residual direction becomes basis vector k (swap arrays so none is lost)
+            double[] spare = v[k];
+            v[k] = residualDirection;
+            v[size] = spare;
+            return k;
+        }
+
+        private Result result(List<Ritz> ritz, int take, boolean converged) {
+            List<double[]> found = new ArrayList<>();
+            // every unstable eigenvalue is among those found once a stable one is, and none of larger |μ| is missing
+            boolean allUnstable = false, noneMissing = true;
+            for (int r = 0; r < Math.min(take, ritz.size()); r++) {
+                Ritz z = ritz.get(r);
+                if (!z.converged && !converged) {
+                    noneMissing = false;
+                    continue;
+                }
+                allUnstable |= noneMissing && z.modulus() < 1;
+                found.add(cayleyInverse(z.re, z.im));
+            }
+            found.sort(Comparator.<double[]>comparingDouble(l -> -l[0]).thenComparingDouble(l -> -l[1]));
+            double[] re = new double[found.size()], im = new double[found.size()];
+            for (int k = 0; k < found.size(); k++) {
+                re[k] = found.get(k)[0];
+                im[k] = found.get(k)[1];
+            }
+            return new Result(re, im, converged, allUnstable, radius);
+        }
+
+        /** λ = σ (μ + 1)/(μ − 1) for μ = a + ib. */
+        private double[] cayleyInverse(double a, double b) {
+            double dr = a - 1, denominator = dr * dr + b * b;
+            double nr = a + 1;
+            // (nr + ib)(dr − ib) / |d|²
+            double re = (nr * dr + b * b) / denominator;
+            double im = (b * dr - nr * b) / denominator;
+            return new double[] {sigma * re, sigma * im};
+        }
+
+        private void normalise(double[] x) {
+            double s = Math.sqrt(dot(x, x));
+            for (int i = 0; i < x.length; i++) {
+                x[i] /= s;
+            }
+        }
+
+        private static double dot(double[] a, double[] b) {
+            double s = 0;
+            for (int i = 0; i < a.length; i++) {
+                s += a[i] * b[i];
+            }
+            return s;
+        }
+    }
+}

@@ -44,13 +44,14 @@ final class BifurcationDiagram {
     static int widestState(ContinuationOutcome o, int states) {
         int best = 0;
         double bestRange = -1;
+        // state() copies its array: take each point's once
+        List<double[]> points = o.branches().stream().flatMap(b -> b.points().stream())
+                .map(ContinuationPoint::state).toList();
         for (int i = 0; i < states; i++) {
             double lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
-            for (Branch b : o.branches()) {
-                for (ContinuationPoint p : b.points()) {
-                    lo = Math.min(lo, p.state()[i]);
-                    hi = Math.max(hi, p.state()[i]);
-                }
+            for (double[] x : points) {
+                lo = Math.min(lo, x[i]);
+                hi = Math.max(hi, x[i]);
             }
             if (hi - lo > bestRange) {
                 bestRange = hi - lo;

@@ -20,12 +20,14 @@ public final class EquilibriumStatesCsv {
         List<String> header = new ArrayList<>(List.of("state"));
         equilibria.forEach(e -> header.add(e.name()));
         Csv.row(out, header);
+        // coordinates() copies its array: once per equilibrium, not once per state (10^5 states made it quadratic)
+        List<double[]> coordinates = equilibria.stream().map(Equilibrium::coordinates).toList();
         List<String> row = new ArrayList<>();
         for (int i = 0; i < stateNames.size(); i++) {
             row.clear();
             row.add(stateNames.get(i));
-            for (Equilibrium e : equilibria) {
-                row.add(Csv.number(e.coordinates()[i]));
+            for (double[] x : coordinates) {
+                row.add(Csv.number(x[i]));
             }
             Csv.row(out, row);
         }

@@ -52,7 +52,8 @@ public record Classification(String type, int stableDimension, int unstableDimen
      * Classifies from the rightmost eigenvalues of an n-dimensional system (not all of them). With
      * {@code allUnstable} the eigenvalues given include every one of positive real part, so the unstable and centre
      * counts are exact; node or focus is not decided (that needs the rest). Without it every eigenvalue given may be
-     * followed by more unstable ones: the unstable count is a lower bound, and the type says so.
+     * followed by more unstable ones: the unstable count is a lower bound, and the type says so; with none among
+     * them nothing is known, and the result is null.
      */
     public static Classification ofRightmost(double[] re, double[] im, int n, boolean allUnstable, double tolerance) {
         int unstable = 0, centre = 0;
@@ -67,7 +68,10 @@ public record Classification(String type, int stableDimension, int unstableDimen
             }
         }
         if (!allUnstable) {
-            return new Classification("unstable, at least " + unstable + " unstable directions", 0, unstable, 0);
+            // more unstable eigenvalues may follow those found: only a lower bound, and none at all says nothing
+            return unstable == 0 ? null
+                    : new Classification("unstable, at least " + unstable + " unstable direction"
+                            + (unstable == 1 ? "" : "s"), 0, unstable, 0);
         }
         String type;
         if (centre > 0) {

@@ -110,7 +110,8 @@ public final class EquilibriumFinder {
             if (sparse != null) { // n² entries and an n³ eigen-solver are out of reach: the sparse spectrum instead
                 SparseMatrix m = sparse.newMatrix();
                 sparse.values(0.0, x, parameters, m.values());
-                stability = LinearStability.ofSparse(m, settings.eigenTolerance());
+                stability = LinearStability.ofSparse(m, settings.eigenTolerance(), () -> cancelled.getAsBoolean()
+                        || (deadlineNanos != Long.MAX_VALUE && System.nanoTime() - deadlineNanos > 0));
             } else if (jac == null) {
                 stability = LinearStability.notClassified(n);
             } else {

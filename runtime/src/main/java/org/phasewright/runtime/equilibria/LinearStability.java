@@ -2,6 +2,7 @@ package org.phasewright.runtime.equilibria;
 
 import java.util.Arrays;
 import java.util.Comparator;
+import java.util.function.BooleanSupplier;
 
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.EigenDecomposition;
@@ -59,9 +60,10 @@ public final class LinearStability {
      * lower bound ("at least") when every eigenvalue found is unstable. Either way only the
      * {@link RightmostEigenvalues#WANTED} rightmost eigenvalues are kept. Zero means below
      * {@code relativeTolerance} times the Gershgorin bound of J (its largest absolute row sum; the Frobenius norm the
-     * dense case uses grows with the dimension).
+     * dense case uses grows with the dimension). {@code stop} (a deadline or a cancel) is checked between the
+     * pieces of work; when it fires the equilibrium is left "not classified".
      */
-    public static LinearStability ofSparse(SparseMatrix j, double relativeTolerance) {
+    public static LinearStability ofSparse(SparseMatrix j, double relativeTolerance, BooleanSupplier stop) {
         int n = j.dimension();
         if (!j.allFinite()) {
             double[] nan = {Double.NaN};
@@ -76,20 +78,26 @@ public final class LinearStability {
             scale = Math.max(scale, row);
         }
         double tolerance = relativeTolerance * scale;
-        double[][] all = BlockCirculantSpectrum.of(j, tolerance);
+        // cells must agree far below the zero threshold, so that what is called circulant has cell 0's spectrum
+        double[][] all = BlockCirculantSpectrum.of(j, 1e-3 * tolerance, stop);
         if (all != null) {
             LinearStability full = sorted(all[0], all[1], tolerance);
             int keep = Math.min(n, RightmostEigenvalues.WANTED);
             return new LinearStability(Arrays.copyOf(full.re, keep), Arrays.copyOf(full.im, keep),
                     full.classification);
         }
-        RightmostEigenvalues.Result r = RightmostEigenvalues.of(j);
-        if (r == null || r.real().length == 0) {
-            return new LinearStability(new double[0], new double[0], new Classification(
-                    "not classified: the rightmost of its " + n + " eigenvalues did not converge", 0, 0, 0));
+        RightmostEigenvalues.Result r = stop.getAsBoolean() ? null : RightmostEigenvalues.of(j, tolerance, stop);
+        Classification c = r == null || r.real().length == 0 ? null
+                : Classification.ofRightmost(r.real(), r.imaginary(), n, r.allUnstable(), tolerance);
+        if (c == null) {
+            String why = stop.getAsBoolean() ? "stopped before its eigenvalues were found"
+                    : r == null || r.real().length == 0 ? "the rightmost of its " + n + " eigenvalues did not converge"
+                    : "the " + r.real().length + " rightmost eigenvalues found lie on the imaginary axis (to the "
+                            + "tolerance) and more may";
+            return new LinearStability(new double[0], new double[0], new Classification("not classified: " + why, 0,
+                    0, 0));
         }
-        return new LinearStability(r.real(), r.imaginary(), Classification.ofRightmost(r.real(), r.imaginary(), n,
-                r.allUnstable(), tolerance));
+        return new LinearStability(r.real(), r.imaginary(), c);
     }
 
     private static LinearStability sorted(double[] r, double[] m, double tolerance) {

@@ -17,17 +17,17 @@ import org.apache.commons.math3.linear.EigenDecomposition;
  */
 public final class BlockCirculantSpectrum {
     /** Components per cell tried, smallest first. */
-    static final int MAX_COMPONENTS = 16;
+    static final int MAX_COMPONENTS = 8;
 
     private BlockCirculantSpectrum() {
     }
 
     /**
      * {re, im} of all eigenvalues of j, or null when j is not block circulant for any m up to
-     * {@link #MAX_COMPONENTS} with at least 3 cells (or a block's eigen-solver fails). Entries of different cells count as equal within
+     * {@link #MAX_COMPONENTS} with at least 3 cells (or a block's eigen-solver fails, or {@code stop} fires). Entries of different cells count as equal within
      * {@code tolerance} (absolute).
      */
-    public static double[][] of(SparseMatrix j, double tolerance) {
+    public static double[][] of(SparseMatrix j, double tolerance, java.util.function.BooleanSupplier stop) {
         if (!j.allFinite()) {
             return null;
         }
@@ -36,7 +36,7 @@ public final class BlockCirculantSpectrum {
             if (n % m == 0) {
                 Couplings couplings = couplings(j, m, tolerance);
                 if (couplings != null) {
-                    return spectrum(couplings, m, n / m);
+                    return spectrum(couplings, m, n / m, stop);
                 }
             }
         }
@@ -117,10 +117,13 @@ public final class BlockCirculantSpectrum {
         return (long) g * cells + c;
     }
 
-    private static double[][] spectrum(Couplings k, int m, int cells) {
+    private static double[][] spectrum(Couplings k, int m, int cells, java.util.function.BooleanSupplier stop) {
         double[] re = new double[m * cells], im = new double[m * cells];
         int next = 0;
         for (int wave = 0; wave <= cells / 2; wave++) {
+            if (m > 1 && wave % 1024 == 0 && stop.getAsBoolean()) {
+                return null;
+            }
             double[][] bRe = new double[m][m], bIm = new double[m][m];
             for (int e = 0; e < k.value.length; e++) {
                 // the angle 2π·c·k/N reduced exactly first, so large rings keep full accuracy

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
+import java.util.function.BooleanSupplier;
 
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.EigenDecomposition;
@@ -12,36 +13,41 @@ import org.apache.commons.math3.linear.RealMatrix;
 /**
  * The rightmost eigenvalues of a large sparse real matrix J, enough to decide the stability of an equilibrium
  * without the n³ dense eigen-solver: Arnoldi with thick restarts on the Cayley transform
- * C = (J − σI)⁻¹(J + σI) = I + 2σ(J − σI)⁻¹, which maps eigenvalues λ of J to μ = (λ + σ)/(λ − σ). For σ &gt; 0 the
- * right half-plane goes outside the unit circle and the left half-plane inside it (Meerbergen, Spence &amp; Roose,
- * BIT 34, 1994), so the eigenvalues of C of largest modulus are the unstable eigenvalues of J and, after them, the
- * stable ones nearest the imaginary axis. With σ above the Gershgorin bound of J every λ maps to a finite μ and the
- * eigenvalues of J far out in the left half-plane map near μ = 0, where Arnoldi leaves them alone.
+ * C = (J − σI)⁻¹(J + σI) = I + 2σ(J − σI)⁻¹, which maps eigenvalues λ of J to μ = (λ + σ)/(λ − σ). For any σ &gt; 0
+ * the right half-plane goes outside the unit circle and the left half-plane inside it (Meerbergen, Spence &amp; Roose,
+ * BIT 34, 1994), so the eigenvalues of C of largest modulus are the unstable eigenvalues of J and, after them, stable
+ * ones near the imaginary axis (near in proportion to σ: the list is close to, not exactly, the order of real parts).
  * <p>
- * The restart keeps an orthonormal basis of the wanted Ritz vectors as the start of the next Krylov decomposition
- * (Stewart's Krylov–Schur restart, SIAM J. Matrix Anal. Appl. 23, 2001, without reordering a Schur form). One sparse
- * LU factorisation of J − σI serves every product with C.
+ * σ is tried at 1.5 times the Gershgorin bound of J (every λ maps to a finite μ and eigenvalues far out in the left
+ * half-plane map near μ = 0), then at smaller fractions of it, which spread the eigenvalues near zero of spectra that
+ * span many orders of magnitude (diffusion on fine grids) apart again. The restart keeps an orthonormal basis of the
+ * wanted Ritz vectors as the start of the next Krylov decomposition (Stewart's Krylov–Schur restart, SIAM J. Matrix
+ * Anal. Appl. 23, 2001, without reordering a Schur form). When the Krylov space becomes invariant, a new start vector
+ * orthogonal to it continues the basis, so exactly repeated eigenvalues are not taken for single ones. One sparse LU
+ * factorisation of J − σI serves every product with C.
  */
 public final class RightmostEigenvalues {
     /** Eigenvalues sought (a complex pair may add one): enough to count a few unstable directions. */
     public static final int WANTED = 12;
-    private static final int BASIS = 40;
-    /**
-     * Restarts allowed: 100, fewer for large n so that one classification stays near 2·10⁹ flops (a few seconds;
-     * each restart costs about 4·n·BASIS² for orthogonalisation plus BASIS sparse solves).
-     */
+    /** Krylov basis size; above {@link #LARGE} states a smaller one keeps the basis near 200 MB. */
+    private static final int BASIS = 40, SMALL_BASIS = 26, LARGE = 500_000;
     private static final int MAX_RESTARTS = 100;
+    /** Flops allowed per pole tried: about 4·n·BASIS² per restart for orthogonalisation, plus the sparse solves. */
     private static final double WORK = 2e9;
+    /** Poles σ tried in turn, as multiples of the Gershgorin bound, until the wanted Ritz values converge. */
+    private static final double[] POLES = {1.5, 0.03, 0.001};
     /** A Ritz pair of C has converged when its residual is below this times |μ|. */
     private static final double RESIDUAL = 1e-10;
 
     /**
-     * The eigenvalues found, real parts largest first (a complex pair as +b then −b).
+     * The eigenvalues found, real parts largest first (a complex pair as +b then −b): those of largest |μ| under
+     * the last pole tried, without gaps.
      *
-     * @param converged    false when the wanted Ritz values did not all settle within the restart limit; the
-     *                     eigenvalues are then those that did
-     * @param allUnstable  true when the eigenvalues found include every eigenvalue of positive real part: some
-     *                     eigenvalue found is stable, and all others of J map to smaller |μ| still
+     * @param converged    false when the wanted Ritz values did not all settle within the work limit; the
+     *                     eigenvalues are then the leading ones that did
+     * @param allUnstable  true when the eigenvalues found include every eigenvalue of real part ≥ −zeroTolerance:
+     *                     some eigenvalue found has real part below −zeroTolerance, and all others of J map to
+     *                     smaller |μ| still
      * @param scale        the Gershgorin bound of J (max row sum of |J_ij|), the size the eigenvalues are measured by
      */
     public record Result(double[] real, double[] imaginary, boolean converged, boolean allUnstable, double scale) {
@@ -50,23 +56,41 @@ public final class RightmostEigenvalues {
     private RightmostEigenvalues() {
     }
 
-    /** The rightmost eigenvalues of j; null when J − σI cannot be factored or J has entries that are not finite. */
-    public static Result of(SparseMatrix j) {
+    /**
+     * The rightmost eigenvalues of j; null when J − σI cannot be factored for any pole, J has entries that are not
+     * finite, or {@code stop} says so (checked between restarts).
+     *
+     * @param zeroTolerance real parts within this of 0 count as zero (absolute)
+     */
+    public static Result of(SparseMatrix j, double zeroTolerance, BooleanSupplier stop) {
         int n = j.dimension();
         if (!j.allFinite()) {
             return null;
         }
         double radius = gershgorinRadius(j);
         if (radius == 0) { // the zero matrix: every eigenvalue is 0
-            return new Result(new double[Math.min(n, WANTED)], new double[Math.min(n, WANTED)], true, true, 0);
+            return new Result(new double[Math.min(n, WANTED)], new double[Math.min(n, WANTED)], true, false, 0);
         }
-        double sigma = 1.5 * radius; // above every |λ|, so J − σI is not singular
-        SparseMatrix shifted = shifted(j, sigma);
-        SparseLu lu = new SparseLu(shifted.pattern());
-        if (!lu.factor(shifted)) {
-            return null;
+        Result best = null;
+        for (double pole : POLES) {
+            double sigma = pole * radius;
+            SparseMatrix shifted = shifted(j, sigma);
+            SparseLu lu = new SparseLu(shifted.pattern());
+            if (!lu.factor(shifted)) {
+                continue; // σ is (numerically) an eigenvalue: try the next pole
+            }
+            Result r = new Arnoldi(n, lu, sigma, radius, zeroTolerance, stop).run();
+            if (r == null) {
+                return null; // stopped
+            }
+            if (r.converged()) {
+                return r;
+            }
+            if (best == null || r.real().length > best.real().length) {
+                best = r;
+            }
         }
-        return new Arnoldi(n, lu, sigma, radius).run();
+        return best;
     }
 
     private static double gershgorinRadius(SparseMatrix j) {
@@ -96,40 +120,45 @@ public final class RightmostEigenvalues {
         return m;
     }
 
-    /** One run: the Krylov basis, its projected matrix and the restart loop. */
+    /** One run for one pole: the Krylov basis, its projected matrix and the restart loop. */
     private static final class Arnoldi {
         private final int n, m, wanted;
         private final SparseLu lu;
-        private final double sigma, radius;
+        private final double sigma, radius, stableBelow;
+        private final BooleanSupplier stop;
         private final double[][] v; // basis vectors v[0..m], v[m] the residual direction
         private final double[][] h; // (m + 1) × m projected matrix
-        private final double[] w, coefficients;
+        private final double[] w, solved, coefficients;
+        private int starts; // start vectors used so far (a new one after each invariant subspace)
 
-        Arnoldi(int n, SparseLu lu, double sigma, double radius) {
+        Arnoldi(int n, SparseLu lu, double sigma, double radius, double zeroTolerance, BooleanSupplier stop) {
             this.n = n;
             this.lu = lu;
             this.sigma = sigma;
             this.radius = radius;
-            this.m = Math.min(BASIS, n);
+            this.stop = stop;
+            // every λ with Re λ ≥ −tol has |μ| ≥ (σ − tol)/(σ + tol), since |λ − σ| ≥ |λ + σ| − 2·tol there
+            double t = Math.min(zeroTolerance, 0.5 * sigma);
+            this.stableBelow = (sigma - t) / (sigma + t);
+            this.m = Math.min(n <= LARGE ? BASIS : SMALL_BASIS, n);
             this.wanted = Math.min(WANTED, Math.max(1, m - 2 - m / 4));
             v = new double[m + 1][];
             h = new double[m + 1][m];
             w = new double[n];
+            solved = new double[n];
             coefficients = new double[m + 1];
         }
 
+        /** Null when stopped. */
         Result run() {
-            // a start with every component, the same on every run
-            double[] start = new double[n];
-            for (int i = 0; i < n; i++) {
-                start[i] = 1 + 0.5 * Math.sin(1.0 + i * 0.7548776662466927);
-            }
-            normalise(start);
-            v[0] = start;
+            v[0] = startVector(0);
             int kept = 0;
             List<Ritz> last = List.of();
-            int restarts = (int) Math.max(10, Math.min(MAX_RESTARTS, WORK / (4.0 * n * m * m)));
+            int restarts = (int) Math.max(1, Math.min(MAX_RESTARTS, WORK / (4.0 * n * m * m)));
             for (int restart = 0; restart <= restarts; restart++) {
+                if (stop.getAsBoolean()) {
+                    return null;
+                }
                 int size = expand(kept);
                 List<Ritz> ritz = ritzPairs(size);
                 if (ritz == null) {
@@ -137,8 +166,7 @@ public final class RightmostEigenvalues {
                 }
                 last = ritz;
                 int take = wantedCount(ritz);
-                boolean invariant = size < m || h[size][size - 1] == 0;
-                boolean done = invariant;
+                boolean done = size == n; // the whole space: every Ritz value is an eigenvalue
                 if (!done) {
                     done = true;
                     for (int r = 0; r < take; r++) {
@@ -156,7 +184,24 @@ public final class RightmostEigenvalues {
             return result(last, wantedCount(last), false);
         }
 
-        /** Extends the decomposition from {@code kept} columns to m (fewer on an invariant subspace). */
+        /**
+         * Start vector number k: pseudo-random components in [0.5, 1.5) from a fixed seed, so every run is the same
+         * and different k give independent directions.
+         */
+        private double[] startVector(int k) {
+            java.util.SplittableRandom random = new java.util.SplittableRandom(0x5DEECE66DL + 7919L * k);
+            double[] x = new double[n];
+            for (int i = 0; i < n; i++) {
+                x[i] = 0.5 + random.nextDouble();
+            }
+            normalise(x);
+            return x;
+        }
+
+        /**
+         * Extends the decomposition from {@code kept} columns to m (to n when n ≤ m). On an invariant subspace the
+         * subdiagonal entry is 0 and a new start vector, orthogonal to the basis, continues it.
+         */
         private int expand(int kept) {
             for (int col = kept; col < m; col++) {
                 System.arraycopy(v[col], 0, w, 0, n);
@@ -165,27 +210,49 @@ public final class RightmostEigenvalues {
                 for (int r = 0; r <= col; r++) {
                     h[r][col] = coefficients[r];
                 }
-                if (!(norm > 1e-13 * (1 + Math.abs(h[col][col])))) { // an invariant subspace: the Ritz values are exact
-                    h[col + 1][col] = 0;
-                    return col + 1;
-                }
-                h[col + 1][col] = norm;
                 double[] next = v[col + 1] == null ? new double[n] : v[col + 1];
-                for (int i = 0; i < n; i++) {
-                    next[i] = w[i] / norm;
+                if (norm > 1e-12 * (1 + Math.abs(h[col][col]))) {
+                    h[col + 1][col] = norm;
+                    for (int i = 0; i < n; i++) {
+                        next[i] = w[i] / norm;
+                    }
+                } else { // invariant: the Ritz values so far are exact; go on from a fresh direction
+                    h[col + 1][col] = 0;
+                    if (col + 1 == n) {
+                        return n;
+                    }
+                    if (!freshDirection(next, col + 1)) {
+                        return col + 1;
+                    }
                 }
                 v[col + 1] = next;
             }
             return m;
         }
 
+        /** A new start vector orthogonal to v[0..count) into x; false if none is left (rounding). */
+        private boolean freshDirection(double[] x, int count) {
+            for (int attempt = 0; attempt < 3; attempt++) {
+                double[] fresh = startVector(++starts);
+                System.arraycopy(fresh, 0, x, 0, n);
+                double norm = orthogonalise(x, count);
+                if (norm > 1e-6) {
+                    for (int i = 0; i < n; i++) {
+                        x[i] /= norm;
+                    }
+                    return true;
+                }
+            }
+            return false;
+        }
+
         /** x ← C x = x + 2σ (J − σI)⁻¹ x. */
         private void applyCayley(double[] x) {
-            double[] y = x.clone();
-            lu.solve(y);
+            System.arraycopy(x, 0, solved, 0, n);
+            lu.solve(solved);
             double twoSigma = 2 * sigma;
             for (int i = 0; i < n; i++) {
-                x[i] += twoSigma * y[i];
+                x[i] += twoSigma * solved[i];
             }
         }
 
@@ -217,7 +284,7 @@ public final class RightmostEigenvalues {
         }
 
         /** A Ritz value μ of C, the real basis of its vector in the projected space (one column, or two for a pair). */
-        private record Ritz(double re, double im, double[] vectorRe, double[] vectorIm, boolean converged) {
+        private record Ritz(double re, double im, double[] vectorRe, double[] vectorIm, boolean converged, int group) {
             double modulus() {
                 return Math.hypot(re, im);
             }
@@ -252,13 +319,15 @@ public final class RightmostEigenvalues {
                 double normSquared = dot(x, x) + (y == null ? 0 : dot(y, y));
                 double residual = Math.abs(tail) * Math.sqrt(lastSquared / normSquared);
                 boolean converged = residual <= RESIDUAL * Math.max(Math.hypot(re[k], im[k]), 1e-3);
-                out.add(new Ritz(re[k], Math.abs(im[k]), x, y, converged));
+                out.add(new Ritz(re[k], Math.abs(im[k]), x, y, converged, k));
                 if (y != null) {
-                    out.add(new Ritz(re[k], -Math.abs(im[k]), x, y, converged));
+                    out.add(new Ritz(re[k], -Math.abs(im[k]), x, y, converged, k));
                     k++;
                 }
             }
-            out.sort(Comparator.comparingDouble(Ritz::modulus).reversed().thenComparing(r -> -r.im));
+            // both members of a pair have the same modulus: keep them together, +b first, even when pairs tie
+            out.sort(Comparator.comparingDouble(Ritz::modulus).reversed().thenComparingInt(Ritz::group)
+                    .thenComparing(r -> -r.im));
             return out;
         }
 
@@ -355,18 +424,25 @@ public final class RightmostEigenvalues {
             return k;
         }
 
+        /**
+         * The leading {@code take} Ritz values as eigenvalues of J, up to the first that has not converged (so the
+         * list has no gaps); all unstable ones are among them once one lies clearly inside the unit circle.
+         */
         private Result result(List<Ritz> ritz, int take, boolean converged) {
             List<double[]> found = new ArrayList<>();
-            // every unstable eigenvalue is among those found once a stable one is, and none of larger |μ| is missing
-            boolean allUnstable = false, noneMissing = true;
+            boolean allUnstable = false;
+            Ritz lastAdded = null;
             for (int r = 0; r < Math.min(take, ritz.size()); r++) {
                 Ritz z = ritz.get(r);
                 if (!z.converged && !converged) {
-                    noneMissing = false;
-                    continue;
+                    break;
                 }
-                allUnstable |= noneMissing && z.modulus() < 1;
+                allUnstable |= z.modulus() < stableBelow;
                 found.add(cayleyInverse(z.re, z.im));
+                lastAdded = z;
+            }
+            if (lastAdded != null && lastAdded.im > 0) { // never half a pair
+                found.remove(found.size() - 1);
             }
             found.sort(Comparator.<double[]>comparingDouble(l -> -l[0]).thenComparingDouble(l -> -l[1]));
             double[] re = new double[found.size()], im = new double[found.size()];

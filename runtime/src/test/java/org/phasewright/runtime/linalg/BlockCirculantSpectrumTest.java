@@ -38,18 +38,22 @@ class BlockCirculantSpectrumTest {
         int[] offsets = {-2, -1, 0, 1};
         double[] coefficients = {-8, 0, -1, 8};
         SparseMatrix j = RightmostEigenvaluesTest.circulant(n, offsets, coefficients);
-        double[][] spectrum = BlockCirculantSpectrum.of(j, 1e-12);
+        double[][] spectrum = BlockCirculantSpectrum.of(j, 1e-12, () -> false);
         assertNotNull(spectrum);
         assertSameSpectrum(RightmostEigenvaluesTest.circulantEigenvalues(n, offsets, coefficients), spectrum, 1e-9);
     }
 
     @Test
     void brusselatorRingMatchesTheTwoByTwoTuringBlocks() {
+        brusselatorRing(301); // odd: no wavenumber N/2
+        brusselatorRing(300); // even: the real block at k = N/2
+    }
+
+    private static void brusselatorRing(int cells) {
         // The Brusselator (Prigogine & Lefever, J. Chem. Phys. 48, 1968) u' = A - (B+1) u + u² v, v' = B u - u² v
         // with diffusion Du, Dv between neighbours of a ring, at its uniform state u = A, v = B/A. Mode θ has the
         // 2×2 matrix [[B-1 - 2Du(1-cos θ), A²], [-B, -A² - 2Dv(1-cos θ)]] (the standard Turing analysis, e.g.
         // Murray, Mathematical Biology II, 3rd ed., 2003, Section 2.3); its eigenvalues by the quadratic formula.
-        int cells = 301;
         double a = 2, b = 4.2, du = 0.4, dv = 3;
         int n = 2 * cells;
         int[] start = new int[n + 1];
@@ -85,7 +89,7 @@ class BlockCirculantSpectrumTest {
                 expected.add(new double[] {trace / 2, -Math.sqrt(-disc)});
             }
         }
-        double[][] spectrum = BlockCirculantSpectrum.of(j, 1e-12);
+        double[][] spectrum = BlockCirculantSpectrum.of(j, 1e-12, () -> false);
         assertNotNull(spectrum);
         assertSameSpectrum(expected, spectrum, 1e-9);
     }
@@ -93,10 +97,14 @@ class BlockCirculantSpectrumTest {
     @Test
     void aMatrixThatIsNotShiftInvariantIsLeftToTheCaller() {
         assertNull(BlockCirculantSpectrum.of(SparseLuTest.stencil(300, new int[] {-1, 0, 1}, true, new Random(3)),
-                1e-12));
+                1e-12, () -> false));
         SparseMatrix ring = RightmostEigenvaluesTest.circulant(300, new int[] {-1, 0, 1}, new double[] {1, -2, 1});
         ring.values()[ring.pattern().find(150, 151)] += 1e-6; // one cell differs: no longer circulant
-        assertNull(BlockCirculantSpectrum.of(ring, 1e-9));
-        assertNotNull(BlockCirculantSpectrum.of(ring, 1e-5)); // within the tolerance it still counts as one
+        assertNull(BlockCirculantSpectrum.of(ring, 1e-9, () -> false));
+        assertNotNull(BlockCirculantSpectrum.of(ring, 1e-5, () -> false)); // within the tolerance it still counts
+        // a coupling that one cell lacks altogether (a structural zero, not a small value)
+        SparseMatrix gap = RightmostEigenvaluesTest.circulant(300, new int[] {-1, 0, 1}, new double[] {1, -2, 1});
+        gap.values()[gap.pattern().find(40, 41)] = 0;
+        assertNull(BlockCirculantSpectrum.of(gap, 1e-9, () -> false));
     }
 }

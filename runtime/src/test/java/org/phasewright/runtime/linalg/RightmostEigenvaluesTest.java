@@ -3,6 +3,7 @@ package org.phasewright.runtime.linalg;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
@@ -84,7 +85,8 @@ class RightmostEigenvaluesTest {
         int[] offsets = {-1, 0, 1};
         double d = 1, c = 0.8, r = 0.005;
         double[] coefficients = {d + c / 2, -2 * d + r, d - c / 2};
-        RightmostEigenvalues.Result result = RightmostEigenvalues.of(circulant(n, offsets, coefficients));
+        RightmostEigenvalues.Result result = RightmostEigenvalues.of(circulant(n, offsets, coefficients), 1e-12,
+                () -> false);
         assertNotNull(result);
         assertTrue(result.converged());
         assertTrue(result.allUnstable());
@@ -101,7 +103,8 @@ class RightmostEigenvaluesTest {
         int[] offsets = {-1, 0, 1};
         double d = 1, c = 0.8, r = 0.05;
         double[] coefficients = {d + c / 2, -2 * d + r, d - c / 2};
-        RightmostEigenvalues.Result result = RightmostEigenvalues.of(circulant(n, offsets, coefficients));
+        RightmostEigenvalues.Result result = RightmostEigenvalues.of(circulant(n, offsets, coefficients), 1e-12,
+                () -> false);
         assertNotNull(result);
         assertTrue(result.converged());
         assertFalse(result.allUnstable());
@@ -116,7 +119,8 @@ class RightmostEigenvaluesTest {
         int n = 500;
         int[] offsets = {-1, 0, 1};
         double[] coefficients = {1, -2.3, 1};
-        RightmostEigenvalues.Result result = RightmostEigenvalues.of(circulant(n, offsets, coefficients));
+        RightmostEigenvalues.Result result = RightmostEigenvalues.of(circulant(n, offsets, coefficients), 1e-12,
+                () -> false);
         assertNotNull(result);
         assertTrue(result.converged());
         assertTrue(result.allUnstable());
@@ -147,7 +151,7 @@ class RightmostEigenvaluesTest {
             for (int k = 0; k < n; k++) {
                 expected.add(new double[] {d.getRealEigenvalues()[k], d.getImagEigenvalues()[k]});
             }
-            RightmostEigenvalues.Result result = RightmostEigenvalues.of(a);
+            RightmostEigenvalues.Result result = RightmostEigenvalues.of(a, 1e-12, () -> false);
             assertNotNull(result);
             long expectedUnstable = expected.stream().filter(l -> l[0] > 1e-8).count();
             assertTrue(result.converged(), "seed " + seed);
@@ -158,5 +162,89 @@ class RightmostEigenvaluesTest {
             assertMatches(result, expected, 1e-7);
         }
         assertTrue(complete >= 2, "exact unstable counts checked on " + complete + " of 4 matrices");
+    }
+    /** A tridiagonal matrix: {@code diagonal} on the diagonal, {@code off} beside it, nothing wraps. */
+    static SparseMatrix tridiagonal(int n, double diagonal, double off) {
+        SparseMatrix m = SparseLuTest.stencil(n, new int[] {-1, 0, 1}, false, new Random(1));
+        for (int i = 0; i < n; i++) {
+            for (int k = m.pattern().rowStart(i); k < m.pattern().rowEnd(i); k++) {
+                m.values()[k] = m.pattern().column(k) == i ? diagonal : off;
+            }
+        }
+        return m;
+    }
+
+    @Test
+    void repeatedEigenvaluesOfUncoupledUnitsAreNotTakenForSingleOnes() {
+        // 300 uncoupled units, 86 growing at rate 1 and 214 decaying at rate 1, in a scrambled order: the Krylov space
+        // of one start vector is 2-dimensional, so without fresh directions only one +1 and one -1 would be found
+        // (and the count "1 unstable direction" claimed). The exact spectrum is the diagonal (common practice: no
+        // source needed).
+        int n = 300;
+        SparseMatrix d = SparseLuTest.stencil(n, new int[] {0}, false, new Random(1));
+        Random random = new Random(7);
+        int growing = 0;
+        for (int i = 0; i < n; i++) {
+            boolean up = growing < 86 && (random.nextDouble() < 0.3 || n - i <= 86 - growing);
+            d.values()[i] = up ? 1 : -1;
+            growing += up ? 1 : 0;
+        }
+        assertEquals(86, growing);
+        RightmostEigenvalues.Result result = RightmostEigenvalues.of(d, 1e-12, () -> false);
+        assertNotNull(result);
+        assertFalse(result.allUnstable());
+        assertTrue(result.real().length >= RightmostEigenvalues.WANTED);
+        for (int k = 0; k < result.real().length; k++) {
+            assertEquals(1.0, result.real()[k], 1e-9);
+            assertEquals(0.0, result.imaginary()[k], 1e-9);
+        }
+    }
+
+    @Test
+    void aClusterOnTheAxisLargerThanTheListIsNotCountedAsComplete() {
+        // 20 uncoupled modes with real parts in (-tol, 0) (zero to the tolerance) ahead of a damped pipe whose
+        // eigenvalues are -0.3 - 4 sin²(kπ/(2(n+1))) (LeVeque 2007, Section 2.10): more centre directions than the
+        // 12 eigenvalues sought, so the result must not claim to hold every eigenvalue of real part >= -tol.
+        int n = 300;
+        double tol = 1e-7;
+        SparseMatrix m = tridiagonal(n, -2.3, 1);
+        for (int i = 0; i < 20; i++) {
+            for (int k = m.pattern().rowStart(i); k < m.pattern().rowEnd(i); k++) {
+                m.values()[k] = m.pattern().column(k) == i ? -tol * (i + 1) / 21 : 0;
+            }
+        }
+        for (int i = 20; i < 22; i++) { // cut the pipe off from the modes
+            int slot = m.pattern().find(i, i - 1);
+            if (slot >= 0) {
+                m.values()[slot] = 0;
+            }
+        }
+        RightmostEigenvalues.Result result = RightmostEigenvalues.of(m, tol, () -> false);
+        assertNotNull(result);
+        assertFalse(result.allUnstable());
+    }
+
+    @Test
+    void longPipeListsItsSlowestModesInOrderWithoutGaps() {
+        // du_i/dt = D (u_{i-1} - 2u_i + u_{i+1}), Dirichlet ends, n = 2000: λ_k = -4D sin²(kπ/(2(n+1))) spans six
+        // orders of magnitude (LeVeque 2007, Section 2.10). The first pole (1.5 times the Gershgorin bound) packs
+        // the slow modes within 1e-6 of μ = -1; a smaller pole separates them.
+        int n = 2000;
+        double d = 0.5;
+        RightmostEigenvalues.Result result = RightmostEigenvalues.of(tridiagonal(n, -2 * d, d), 1e-7 * 4 * d,
+                () -> false);
+        assertNotNull(result);
+        assertTrue(result.converged());
+        assertTrue(result.allUnstable());
+        assertTrue(result.real().length >= 6, "found " + result.real().length);
+        for (int k = 1; k <= result.real().length; k++) {
+            double s = Math.sin(k * Math.PI / (2 * (n + 1)));
+            assertEquals(-4 * d * s * s, result.real()[k - 1], 1e-10, "eigenvalue " + k);
+        }
+    }
+
+    @Test
+    void stopsWhenAskedTo() {
+        assertNull(RightmostEigenvalues.of(tridiagonal(2000, -1, 0.5), 1e-9, () -> true));
     }
 }

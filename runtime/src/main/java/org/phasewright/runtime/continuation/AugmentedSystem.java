@@ -1,11 +1,13 @@
 package org.phasewright.runtime.continuation;
 
 import org.phasewright.runtime.compile.VectorField;
+import org.phasewright.runtime.linalg.SparseMatrix;
 
 /**
  * H(x) = f(u; p(λ)) for x = (u, λ) in R^(n+1), and its n×(n+1) Jacobian [f_u | f_λ]. f_u is the exact Jacobian of
  * the compiled field; f_λ is a central difference with step cbrt(machine epsilon)·max(1, |λ|), whose error is
- * O(h²) ≈ 1e-11 relative (the compiled field has no derivative in a parameter, and one column is cheap).
+ * O(h²) ≈ 1e-11 relative (the compiled field has no derivative in a parameter, and one column is cheap). Large
+ * fields give f_u sparse only.
  * Not thread-safe: it owns work arrays.
  */
 final class AugmentedSystem {
@@ -24,7 +26,7 @@ final class AugmentedSystem {
         this.u = new double[n];
         this.fPlus = new double[n];
         this.fMinus = new double[n];
-        this.jac = new double[n * n];
+        this.jac = field.large() ? null : new double[n * n];
     }
 
     int dimension() {
@@ -60,6 +62,27 @@ final class AugmentedSystem {
         for (int i = 0; i < n; i++) {
             System.arraycopy(jac, i * n, out, i * m, n);
         }
+        parameterColumn(x, fPlus);
+        for (int i = 0; i < n; i++) {
+            out[i * m + n] = fPlus[i];
+        }
+    }
+
+    /** True when f_u is only available sparse (a model above the dense limit). */
+    boolean sparse() {
+        return field.large();
+    }
+
+    /** f_u at x into {@code out}, whose pattern is the field's sparse Jacobian's. */
+    void sparseStateJacobian(double[] x, SparseMatrix out) {
+        System.arraycopy(x, 0, u, 0, n);
+        parameters.fill(x[n], p);
+        field.sparseJacobian().values(0.0, u, p, out.values());
+    }
+
+    /** f_λ at x (length n) into {@code out}. */
+    void parameterColumn(double[] x, double[] out) {
+        System.arraycopy(x, 0, u, 0, n);
         double lambda = x[n];
         double h = STEP * Math.max(1.0, Math.abs(lambda));
         double up = lambda + h, down = lambda - h;
@@ -69,7 +92,7 @@ final class AugmentedSystem {
         parameters.fill(down, p);
         field.rates(0.0, u, p, fMinus);
         for (int i = 0; i < n; i++) {
-            out[i * m + n] = (fPlus[i] - fMinus[i]) / (2 * h);
+            out[i] = (fPlus[i] - fMinus[i]) / (2 * h);
         }
     }
 }

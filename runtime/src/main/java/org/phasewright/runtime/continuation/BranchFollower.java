@@ -10,6 +10,7 @@ import java.util.function.BooleanSupplier;
 
 import org.phasewright.runtime.compile.VectorField;
 import org.phasewright.runtime.equilibria.LinearStability;
+import org.phasewright.runtime.linalg.SparseMatrix;
 
 /**
  * Pseudo-arclength continuation of equilibria f(u; p(λ)) = 0 for λ between two values (Keller 1977; Kuznetsov,
@@ -19,12 +20,17 @@ import org.phasewright.runtime.equilibria.LinearStability;
  * <ul>
  * <li>fold: the λ-component of the tangent changes sign;</li>
  * <li>branch point: det [f_u f_λ; tᵀ] changes sign (it keeps its sign through a fold);</li>
- * <li>Hopf: the real part of the complex eigenvalue pair nearest the imaginary axis changes sign (real pairs
- * ±μ, the neutral saddles that the bialternate product also flags, never count).</li>
+ * <li>Hopf: a complex eigenvalue pair crosses the imaginary axis: the k-th largest real part among the pairs
+ * changes sign, k fixed by how many pairs lie right of the axis (real pairs ±μ, the neutral saddles that the
+ * bialternate product also flags, never count).</li>
  * </ul>
  * Each is located by the Illinois variant of regula falsi on the arclength, correcting onto the curve at every
  * trial. At branch points the other branch is followed in both directions from the second tangent.
- * Not thread-safe.
+ * <p>
+ * Large models (above the dense limit) work with the sparse f_u: bordered systems by a sparse LU with the border
+ * last, the branch-point test by the sign of that determinant (located by halving), and stability and the Hopf test
+ * from the rightmost eigenvalues; branch points are located but the other branch is not followed, and Hopf points
+ * get no first Lyapunov coefficient. Not thread-safe.
  */
 public final class BranchFollower {
     private static final int LOCATE_ITERATIONS = 60;
@@ -37,7 +43,12 @@ public final class BranchFollower {
     private final long deadlineNanos;
     private final BooleanSupplier cancelled;
     private final double hMax, hMin;
-    private final double[] jac;
+    private final double[] jac; // dense f_u; null for a large model
+    private final SparseMatrix sparseJac; // sparse f_u of a large model
+    // the stability of the last point asked for (tests and the point record ask at the same point)
+    private double[] stabilityAt;
+    private LinearStability lastStability;
+    private double lastScale;
 
     private final List<Branch> branches = new ArrayList<>();
     private final List<SpecialPoint> specials = new ArrayList<>();
@@ -50,8 +61,25 @@ public final class BranchFollower {
     private record Seed(double[] x, double[] direction, String origin) {
     }
 
-    /** Test-function values at one point; hopf is NaN when there is no complex pair. */
-    private record Tests(double fold, double branch, double hopf, double frequency) {
+    /**
+     * Test-function values at one point. {@code pairs} holds the real parts of the complex-conjugate pairs,
+     * largest first, and {@code frequencies} their imaginary parts: a Hopf point is where the k-th largest of these
+     * real parts crosses zero (an order statistic, continuous even when pairs overtake one another, unlike the real
+     * part of the pair nearest the axis, which jumps where two pairs straddle it).
+     */
+    private record Tests(double fold, double branch, double[] pairs, double[] frequencies) {
+        int unstablePairs() {
+            int count = 0;
+            for (double re : pairs) {
+                count += re > 0 ? 1 : 0;
+            }
+            return count;
+        }
+
+        /** The real part of the pair of rank k (0: largest), NaN when there are not that many pairs. */
+        double pair(int k) {
+            return k >= 0 && k < pairs.length ? pairs[k] : Double.NaN;
+        }
     }
 
     /**
@@ -73,7 +101,8 @@ public final class BranchFollower {
         double width = Math.max(hi - lo, 1e-300);
         this.hMax = settings.maxStepFraction() * width;
         this.hMin = settings.minStepFraction() * Math.max(width, 1);
-        this.jac = new double[n * n];
+        this.jac = system.sparse() ? null : new double[n * n];
+        this.sparseJac = system.sparse() ? field.sparseJacobian().newMatrix() : null;
     }
 
     /** Follows the branch through each of {@code equilibria} (states at λ = from), and the branches they meet. */
@@ -208,10 +237,22 @@ public final class BranchFollower {
         if (Math.signum(a.branch()) * Math.signum(b.branch()) < 0) {
             out.add(SpecialPoint.Kind.BRANCH_POINT);
         }
-        if (Math.signum(a.hopf()) * Math.signum(b.hopf()) < 0) { // NaN (no complex pair) never counts
+        int rank = hopfRank(a, b);
+        // a pair that crosses keeps its rank among the pairs; NaN (no such pair at one end: two real eigenvalues
+        // meeting off the axis) never counts
+        if (Math.signum(a.pair(rank)) * Math.signum(b.pair(rank)) < 0) {
             out.add(SpecialPoint.Kind.HOPF);
         }
         return out;
+    }
+
+    /**
+     * The rank of the pair that crosses the imaginary axis between a and b: when the count of pairs in the right
+     * half-plane grows it is the first pair still on the left at a, when it shrinks the last one on the right.
+     */
+    private static int hopfRank(Tests a, Tests b) {
+        int before = a.unstablePairs(), after = b.unstablePairs();
+        return after > before ? before : after < before ? before - 1 : -1;
     }
 
     /**
@@ -220,7 +261,8 @@ public final class BranchFollower {
      */
     private void locate(SpecialPoint.Kind kind, double[] x, double[] t, double h, Tests at0, Tests atH, int branch,
             List<ContinuationPoint> points) {
-        RegulaFalsiBracket bracket = new RegulaFalsiBracket(0, value(kind, at0), h, value(kind, atH));
+        int rank = kind == SpecialPoint.Kind.HOPF ? hopfRank(at0, atH) : -1;
+        RegulaFalsiBracket bracket = new RegulaFalsiBracket(0, value(kind, at0, rank), h, value(kind, atH, rank));
         double[] predicted = new double[n + 1];
         double[] best = null;
         double[] bestTangent = null;
@@ -250,7 +292,7 @@ public final class BranchFollower {
                 break;
             }
             Tests ts = tests(y, ty);
-            double fs = value(kind, ts);
+            double fs = value(kind, ts, rank);
             best = y;
             bestTangent = ty;
             bestTests = ts;
@@ -268,8 +310,10 @@ public final class BranchFollower {
         double[] u = java.util.Arrays.copyOf(best, n);
         double frequency = Double.NaN, l1 = Double.NaN;
         if (kind == SpecialPoint.Kind.HOPF) {
-            frequency = bestTests.frequency();
-            l1 = FirstLyapunovCoefficient.at(system.field(), system.parameters().at(best[n]), u, frequency);
+            frequency = bestTests.frequencies()[Math.max(0, Math.min(rank, bestTests.frequencies().length - 1))];
+            if (!system.sparse()) { // its normal form uses the dense Jacobian and its eigenvectors
+                l1 = FirstLyapunovCoefficient.at(system.field(), system.parameters().at(best[n]), u, frequency);
+            }
         }
         specials.add(new SpecialPoint(kind, branch, best[n], u, frequency, l1));
         points.add(point(best, kind));
@@ -280,6 +324,9 @@ public final class BranchFollower {
 
     /** Queues the other branch through a branch point, in both directions. */
     private void switchBranches(double[] x, double[] t, int branch) {
+        if (system.sparse()) {
+            return; // the second tangent needs a dense SVD (ContinuationRunner says so)
+        }
         for (double[] seen : branchPointsSeen) {
             if (same(seen, x)) {
                 return;
@@ -333,35 +380,69 @@ public final class BranchFollower {
         return corrector.correct(predicted, direction, y) ? y : null;
     }
 
-    private static double value(SpecialPoint.Kind kind, Tests tests) {
+    private static double value(SpecialPoint.Kind kind, Tests tests, int hopfRank) {
         return switch (kind) {
             case FOLD -> tests.fold();
             case BRANCH_POINT -> tests.branch();
-            case HOPF -> tests.hopf();
+            case HOPF -> tests.pair(hopfRank);
         };
     }
 
     private Tests tests(double[] x, double[] t) {
         LinearStability s = stability(x);
         double[] re = s.real(), im = s.imaginary();
-        double norm = 0;
-        for (double a : jac) {
-            norm += a * a;
-        }
-        double tolerance = settings.eigenTolerance() * Math.sqrt(norm);
-        double hopf = Double.NaN, frequency = Double.NaN;
+        double tolerance = settings.eigenTolerance() * lastScale;
+        // one entry per pair (its +b member); real parts come sorted, largest first
+        List<double[]> pairs = new ArrayList<>();
         for (int k = 0; k < re.length; k++) {
-            if (im[k] > tolerance && (Double.isNaN(hopf) || Math.abs(re[k]) < Math.abs(hopf))) {
-                hopf = re[k];
-                frequency = im[k];
+            if (im[k] > tolerance) {
+                pairs.add(new double[] {re[k], im[k]});
             }
         }
-        return new Tests(t[n], corrector.branchTest(x, t), hopf, frequency);
+        pairs.sort(Comparator.comparingDouble((double[] p) -> -p[0]));
+        double[] real = new double[pairs.size()], frequency = new double[pairs.size()];
+        for (int k = 0; k < real.length; k++) {
+            real[k] = pairs.get(k)[0];
+            frequency[k] = pairs.get(k)[1];
+        }
+        return new Tests(t[n], corrector.branchTest(x, t), real, frequency);
     }
 
+    /**
+     * Eigenvalues and type at x: all of them from the dense f_u, or for a large model the rightmost from the sparse
+     * one (see {@link LinearStability#ofSparse}). Sets {@link #lastScale}, the size zero is measured against (the
+     * Frobenius norm, or the largest absolute row sum).
+     */
     private LinearStability stability(double[] x) {
-        system.stateJacobian(x, jac);
-        return LinearStability.of(jac, n, settings.eigenTolerance());
+        if (stabilityAt != null && java.util.Arrays.equals(stabilityAt, x)) {
+            return lastStability;
+        }
+        double scale = 0;
+        if (jac != null) {
+            system.stateJacobian(x, jac);
+            lastStability = LinearStability.of(jac, n, settings.eigenTolerance());
+            for (double a : jac) {
+                scale += a * a;
+            }
+            scale = Math.sqrt(scale);
+        } else {
+            system.sparseStateJacobian(x, sparseJac);
+            lastStability = LinearStability.ofSparse(sparseJac, settings.eigenTolerance(), this::stopped);
+            for (int i = 0; i < n; i++) {
+                double row = 0;
+                for (int k = sparseJac.pattern().rowStart(i); k < sparseJac.pattern().rowEnd(i); k++) {
+                    row += Math.abs(sparseJac.values()[k]);
+                }
+                scale = Math.max(scale, row);
+            }
+        }
+        lastScale = scale;
+        stabilityAt = x.clone();
+        return lastStability;
+    }
+
+    private boolean stopped() {
+        return cancelled.getAsBoolean() || (deadlineNanos != Long.MAX_VALUE && System.nanoTime() - deadlineNanos > 0);
     }
 
     private ContinuationPoint point(double[] x, SpecialPoint.Kind special) {

@@ -30,8 +30,12 @@ public record ContinuationPoint(double parameter, double[] state, double[] eigen
         return eigenvaluesImag.clone();
     }
 
-    /** No eigenvalue with positive real part (drawn solid in a bifurcation diagram). */
+    /**
+     * No eigenvalue with positive real part (drawn solid in a bifurcation diagram); false when the point could not
+     * be classified (no dimensions known).
+     */
     public boolean stable() {
-        return classification.unstableDimension() == 0;
+        Classification c = classification;
+        return c.unstableDimension() == 0 && c.stableDimension() + c.centreDimension() > 0;
     }
 }

@@ -14,30 +14,31 @@ final class Corrector {
     static final double STEP_TOLERANCE = 1e-10;
 
     private final AugmentedSystem system;
+    private final BorderedSolver bordered;
     private final int n;
-    private final double[] h, hx, rhs;
+    private final double[] h, rhs;
     /** Newton iterations of the last {@link #correct} call. */
     int iterations;
 
     Corrector(AugmentedSystem system) {
         this.system = system;
         this.n = system.dimension();
+        this.bordered = BorderedSolver.of(system);
         this.h = new double[n];
-        this.hx = new double[n * (n + 1)];
         this.rhs = new double[n + 1];
     }
 
     /** The unit tangent at x oriented like {@code reference} (t·reference > 0); null if it cannot be found. */
     double[] tangent(double[] x, double[] reference) {
-        system.jacobian(x, hx);
-        SquareSolve lu = new SquareSolve(SquareSolve.bordered(hx, n, reference), n + 1);
         double[] v;
-        if (lu.singular()) {
-            v = nullVectors(x, 1)[0];
-        } else {
+        if (bordered.factor(x, reference)) {
             v = new double[n + 1];
             v[n] = 1;
-            lu.solve(v);
+            bordered.solve(v);
+        } else if (system.sparse()) {
+            return null; // no dense SVD for a large model: the caller shortens the step
+        } else {
+            v = nullVectors(x, 1)[0];
         }
         double norm = norm(v);
         if (!(norm > 0) || !Double.isFinite(norm)) {
@@ -60,9 +61,7 @@ final class Corrector {
         while (iterations < MAX_ITERATIONS) {
             iterations++;
             system.value(out, h);
-            system.jacobian(out, hx);
-            SquareSolve lu = new SquareSolve(SquareSolve.bordered(hx, n, direction), n + 1);
-            if (lu.singular()) {
+            if (!bordered.factor(out, direction)) {
                 return false;
             }
             double constraint = 0;
@@ -73,7 +72,7 @@ final class Corrector {
                 rhs[i] = -h[i];
             }
             rhs[n] = -constraint;
-            lu.solve(rhs);
+            bordered.solve(rhs);
             double step = 0, size = 0;
             for (int i = 0; i <= n; i++) {
                 out[i] += rhs[i];
@@ -91,10 +90,12 @@ final class Corrector {
         return false;
     }
 
-    /** det [H_x; t^T]: changes sign at a simple branch point, keeps its sign through a fold. */
+    /**
+     * det [H_x; t^T], or for a large model only its sign: changes sign at a simple branch point, keeps its sign
+     * through a fold.
+     */
     double branchTest(double[] x, double[] t) {
-        system.jacobian(x, hx);
-        return new SquareSolve(SquareSolve.bordered(hx, n, t), n + 1).determinant();
+        return bordered.factor(x, t) ? bordered.determinantTest() : 0;
     }
 
     /**
@@ -102,6 +103,9 @@ final class Corrector {
      * {@code t} of the branch we came along is the tangent of the other branch (to first order).
      */
     double[] secondTangent(double[] x, double[] t) {
+        if (system.sparse()) {
+            return null; // the kernel comes from a dense SVD
+        }
         double[][] kernel = nullVectors(x, 2);
         double[] best = null;
         double bestNorm = 0;
@@ -128,6 +132,7 @@ final class Corrector {
 
     /** The right singular vectors of H_x (padded to square with a zero row) for the smallest singular values. */
     private double[][] nullVectors(double[] x, int count) {
+        double[] hx = new double[n * (n + 1)];
         system.jacobian(x, hx);
         double[][] a = new double[n + 1][n + 1];
         for (int i = 0; i < n; i++) {

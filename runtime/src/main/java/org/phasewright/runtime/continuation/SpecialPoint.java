@@ -41,7 +41,10 @@ public record SpecialPoint(Kind kind, int branch, double parameter, double[] sta
         if (kind != Kind.HOPF) {
             return null;
         }
-        if (!Double.isFinite(firstLyapunovCoefficient) || firstLyapunovCoefficient == 0) {
+        if (Double.isNaN(firstLyapunovCoefficient)) {
+            return "criticality not computed"; // large models: no normal form
+        }
+        if (Double.isInfinite(firstLyapunovCoefficient) || firstLyapunovCoefficient == 0) {
             return "degenerate";
         }
         return firstLyapunovCoefficient > 0 ? "subcritical" : "supercritical";

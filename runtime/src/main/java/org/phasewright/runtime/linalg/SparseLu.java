@@ -35,10 +35,21 @@ public final class SparseLu {
     private boolean structure;
 
     public SparseLu(SparsePattern pattern) {
+        this(pattern, SparseOrdering.reverseCuthillMcKee(pattern));
+    }
+
+    /**
+     * With a given column order ({@code columnOrder[k]} is the column taken k-th), e.g. a bordered matrix whose
+     * dense last row and column must come last: reverse Cuthill–McKee would put them first and fill everything.
+     */
+    public SparseLu(SparsePattern pattern, int[] columnOrder) {
         this.n = pattern.dimension();
         this.pattern = pattern;
         this.columns = pattern.transpose();
-        this.q = SparseOrdering.reverseCuthillMcKee(pattern);
+        if (columnOrder.length != n) {
+            throw new IllegalArgumentException("column order of " + columnOrder.length + " for " + n + " columns");
+        }
+        this.q = columnOrder.clone();
         this.rowOf = new int[n];
         int guess = Math.max(16, 2 * pattern.nonZeros() + n);
         lp = new int[n + 1];
@@ -286,6 +297,43 @@ public final class SparseLu {
             }
         }
         return top;
+    }
+
+    /**
+     * The sign of det A after a successful {@link #factor}: the signs of U's pivots times the parities of the row and
+     * column permutations (det P A Q = det L det U with L unit lower triangular). The value itself would over- or
+     * underflow for large n.
+     */
+    public int determinantSign() {
+        if (!factored) {
+            throw new IllegalStateException("no factorisation");
+        }
+        int sign = 1;
+        for (int j = 0; j < n; j++) {
+            if (ux[up[j + 1] - 1] < 0) {
+                sign = -sign;
+            }
+        }
+        return sign * parity(rowOf) * parity(q);
+    }
+
+    /** +1 for an even permutation, -1 for an odd one (by its cycles). */
+    private static int parity(int[] permutation) {
+        boolean[] seen = new boolean[permutation.length];
+        int sign = 1;
+        for (int i = 0; i < permutation.length; i++) {
+            if (!seen[i]) {
+                int length = 0;
+                for (int j = i; !seen[j]; j = permutation[j]) {
+                    seen[j] = true;
+                    length++;
+                }
+                if (length % 2 == 0) {
+                    sign = -sign;
+                }
+            }
+        }
+        return sign;
     }
 
     /** Solves A x = b in place (b becomes x), after a successful {@link #factor}. */

@@ -54,18 +54,28 @@ final class ContinuationSummary {
         out.append("  special points:\n");
         List<List<String>> rows = new ArrayList<>();
         List<String> header = new ArrayList<>(List.of("kind", "branch", o.parameterName()));
-        header.addAll(study.stateNames());
+        int shown = Math.min(study.stateNames().size(), TextSummary.SHOWN_STATES); // large models: the first few
+        boolean cut = shown < study.stateNames().size();
+        header.addAll(study.stateNames().subList(0, shown));
+        if (cut) {
+            header.add("...");
+        }
         header.add("notes");
         rows.add(header);
         for (SpecialPoint s : o.specialPoints()) {
             List<String> row = new ArrayList<>(List.of(s.kind().word(), Integer.toString(s.branch()),
                     Numbers.compact(s.parameter())));
-            for (double x : s.state()) {
-                row.add(Numbers.compact(x));
+            double[] state = s.state();
+            for (int i = 0; i < shown; i++) {
+                row.add(Numbers.compact(state[i]));
             }
-            row.add(s.kind() == SpecialPoint.Kind.HOPF ? s.criticality() + ", first Lyapunov coefficient "
-                    + Numbers.compact(s.firstLyapunovCoefficient()) + ", frequency " + Numbers.compact(s.frequency())
-                    : "");
+            if (cut) {
+                row.add("...");
+            }
+            row.add(s.kind() != SpecialPoint.Kind.HOPF ? ""
+                    : s.criticality() + (Double.isNaN(s.firstLyapunovCoefficient()) ? ""
+                            : ", first Lyapunov coefficient " + Numbers.compact(s.firstLyapunovCoefficient()))
+                            + ", frequency " + Numbers.compact(s.frequency()));
             rows.add(row);
         }
         int[] width = new int[header.size()];

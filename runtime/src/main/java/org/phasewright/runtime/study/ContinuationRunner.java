@@ -42,12 +42,14 @@ final class ContinuationRunner {
                     "equilibria are only defined for autonomous models, but the rates depend on time "
                             + model.timeName());
         }
-        if (model.field().large()) {
-            // The branch follower works with dense (n+1)×(n+1) systems and eigenvalues at every step.
-            return new ContinuationResult(null, Status.FAILED, "MODEL_TOO_LARGE", "continuation works with dense "
-                    + "Jacobians, which models have up to " + SparseJacobian.DENSE_LIMIT + " states (indexed models "
-                    + "up to " + ModelCompiler.INDEXED_DENSE_JACOBIAN_LIMIT + "); this model has "
-                    + model.dimension());
+        boolean large = model.field().large();
+        if (large && (model.dimension() > ReducedOutput.LIMIT || model.field().sparseJacobian() == null)) {
+            // every point of a branch records the whole state and its eigenvalues, and needs a sparse Jacobian
+            return new ContinuationResult(null, Status.FAILED, "MODEL_TOO_LARGE", "continuation follows models of "
+                    + "up to " + ReducedOutput.LIMIT + " states with a sparse Jacobian (above "
+                    + SparseJacobian.DENSE_LIMIT + " states; dense up to " + SparseJacobian.DENSE_LIMIT
+                    + ", indexed models up to " + ModelCompiler.INDEXED_DENSE_JACOBIAN_LIMIT + "); this model has "
+                    + model.dimension() + (model.field().sparseJacobian() == null ? " and no sparse Jacobian" : ""));
         }
         double[] base = model.parameters();
         double from, to;
@@ -66,21 +68,32 @@ final class ContinuationRunner {
         } catch (ModelEvaluationException e) {
             return new ContinuationResult(null, Status.FAILED, "INVALID_INPUT", e.getMessage());
         }
-        StartPoints starts = StartPoints.build(p, initial, EquilibriumSearchRunner.shortRun(model, p, initial,
-                EquilibriumSearchRunner.SHORT_RUN_STEPS, Integer.MAX_VALUE, settings, budget),
-                settings.equilibria());
-        Optional<PolynomialRoots.Summary> homotopy = PolynomialRoots.find(model.model(), p, budget.deadlineNanos(),
-                budget.cancelled());
-        if (homotopy.isPresent()) {
-            starts = starts.withLeading(homotopy.get().realRoots());
+        EquilibriumSearchOutcome search;
+        if (large) { // sparse Newton from a few starts, as an equilibrium search of a large model
+            StartPoints starts = EquilibriumSearchRunner.largeStarts(p, initial, EquilibriumSearchRunner.shortRun(
+                    model, p, initial, EquilibriumSearchRunner.LARGE_SHORT_RUN_STEPS,
+                    EquilibriumSearchRunner.LARGE_TRAJECTORY_STARTS, settings, budget), settings);
+            search = new EquilibriumFinder(model.field(), p, EquilibriumSearchRunner.largeSettings(settings))
+                    .find(starts, budget.deadlineNanos(), budget.cancelled());
+        } else {
+            StartPoints starts = StartPoints.build(p, initial, EquilibriumSearchRunner.shortRun(model, p, initial,
+                    EquilibriumSearchRunner.SHORT_RUN_STEPS, Integer.MAX_VALUE, settings, budget),
+                    settings.equilibria());
+            Optional<PolynomialRoots.Summary> homotopy = PolynomialRoots.find(model.model(), p,
+                    budget.deadlineNanos(), budget.cancelled());
+            if (homotopy.isPresent()) {
+                starts = starts.withLeading(homotopy.get().realRoots());
+            }
+            search = new EquilibriumFinder(model.field(), p, settings.equilibria())
+                    .find(starts, budget.deadlineNanos(), budget.cancelled());
         }
-        EquilibriumSearchOutcome search = new EquilibriumFinder(model.field(), p, settings.equilibria())
-                .find(starts, budget.deadlineNanos(), budget.cancelled());
         List<double[]> roots = search.equilibria().stream().map(Equilibrium::coordinates).toList();
         ContinuationOutcome outcome = new BranchFollower(model.field(), parameters, base.length, from, to,
                 ContinuationSettings.DEFAULT.withBlowUpBound(settings.blowUpBound()), budget.deadlineNanos(),
                 budget.cancelled()).follow(roots);
-        List<CycleBranch> cycles = cycles(model, parameters, base.length, from, to, outcome, settings, budget);
+        // shooting for periodic orbits integrates the n×n variational equations: not for large models
+        List<CycleBranch> cycles = large ? List.of()
+                : cycles(model, parameters, base.length, from, to, outcome, settings, budget);
         boolean complete = outcome.ending() == ContinuationOutcome.Ending.COMPLETED
                 && search.ending() == EquilibriumSearchOutcome.Ending.COMPLETED;
         String message = roots.size() + (roots.size() == 1 ? " equilibrium" : " equilibria") + " at "
@@ -90,6 +103,11 @@ final class ContinuationRunner {
             message += "; " + cycles.size() + (cycles.size() == 1 ? " family" : " families")
                     + " of periodic orbits from Hopf points, " + special + " special "
                     + (special == 1 ? "point" : "points") + " on them";
+        }
+        if (large) {
+            message += "; a model of " + model.dimension() + " states is followed with its sparse Jacobian: "
+                    + "stability from the rightmost eigenvalues, branch points located but the other branch not "
+                    + "followed, no periodic orbits from Hopf points";
         }
         if (search.ending() != EquilibriumSearchOutcome.Ending.COMPLETED) {
             message += "; the search at the start " + search.message().replaceFirst("^found [^;]*; ", "");

@@ -74,13 +74,8 @@ final class EquilibriumSearchRunner {
         List<double[]> points = trajectory != null ? rows(trajectory, LARGE_TRAJECTORY_STARTS)
                 : shortRun(model, p, model.initialState(), LARGE_SHORT_RUN_STEPS, LARGE_TRAJECTORY_STARTS,
                         settings, budget);
-        EquilibriumSettings defaults = settings.equilibria();
-        EquilibriumSettings few = new EquilibriumSettings(0, LARGE_TRAJECTORY_STARTS,
-                defaults.maxNewtonIterations(), Math.min(defaults.maxTotalIterations(), LARGE_ITERATIONS),
-                defaults.residualTolerance(), defaults.stepTolerance(), defaults.duplicateTolerance(),
-                defaults.eigenTolerance());
-        StartPoints starts = StartPoints.build(p, model.initialState(), points, few);
-        EquilibriumSearchOutcome search = new EquilibriumFinder(model.field(), p, few)
+        StartPoints starts = largeStarts(p, model.initialState(), points, settings);
+        EquilibriumSearchOutcome search = new EquilibriumFinder(model.field(), p, largeSettings(settings))
                 .find(starts, budget.deadlineNanos(), budget.cancelled());
         Status status = search.ending() == EquilibriumSearchOutcome.Ending.COMPLETED ? Status.COMPLETED
                 : Status.INCOMPLETE;
@@ -91,6 +86,19 @@ final class EquilibriumSearchRunner {
                 + RightmostEigenvalues.WANTED + " are listed";
         return new EquilibriumResult(search.equilibria(), search, status, search.ending().name(), message,
                 symmetry(model, search.equilibria()));
+    }
+
+    /** The equilibrium settings of a large model's search: no quasi-random starts, fewer Newton iterations. */
+    static EquilibriumSettings largeSettings(RunSettings settings) {
+        EquilibriumSettings defaults = settings.equilibria();
+        return new EquilibriumSettings(0, LARGE_TRAJECTORY_STARTS, defaults.maxNewtonIterations(),
+                Math.min(defaults.maxTotalIterations(), LARGE_ITERATIONS), defaults.residualTolerance(),
+                defaults.stepTolerance(), defaults.duplicateTolerance(), defaults.eigenTolerance());
+    }
+
+    /** Starts of a large model's search: the initial state, the origin and the given points of a run. */
+    static StartPoints largeStarts(double[] p, double[] initial, List<double[]> points, RunSettings settings) {
+        return StartPoints.build(p, initial, points, largeSettings(settings));
     }
 
     /** Orbits, isotropy and invariant subspaces under the declared symmetries (empty when there are none). */

@@ -6,47 +6,18 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 
 import org.junit.jupiter.api.Test;
-import org.phasewright.runtime.assemble.ModelAssembler;
 import org.phasewright.runtime.compile.CompiledModel;
 import org.phasewright.runtime.compile.ModelCompiler;
 import org.phasewright.runtime.compile.VectorField;
 import org.phasewright.runtime.linalg.Forced;
 import org.phasewright.runtime.linalg.LatticeModels;
-import org.phasewright.runtime.model.Binary;
-import org.phasewright.runtime.model.BinaryOperator;
-import org.phasewright.runtime.model.Call;
-import org.phasewright.runtime.model.Constant;
-import org.phasewright.runtime.model.DynamicalModel;
-import org.phasewright.runtime.model.Expr;
-import org.phasewright.runtime.model.Family;
-import org.phasewright.runtime.model.IndexRange;
-import org.phasewright.runtime.model.IndexValue;
-import org.phasewright.runtime.model.MathFunction;
-import org.phasewright.runtime.model.TimeAxis;
-import org.phasewright.runtime.model.Variable;
 
 class SparseNewtonTest {
     private static final EquilibriumSettings FEW_STARTS = new EquilibriumSettings(0, 0, 100, 2000, 1e-10, 1e-9,
             1e-6, 1e-7);
 
-    private static Expr at(int offset) {
-        return new Binary(BinaryOperator.ADD, new IndexValue("i"), new Constant(offset));
-    }
 
     /** Bratu's problem u'' + λ e^u = 0 on (0, 1), u(0) = u(1) = 0, by central differences on n interior points. */
-    static DynamicalModel bratu(int n, double lambda) {
-        ModelAssembler a = new ModelAssembler("bratu", null, new TimeAxis("t", null));
-        Variable l = a.parameter("lambda", new Constant(lambda), null, null, null);
-        Family u = a.stateFamily("u", new IndexRange("i", 1, n, false), new Constant(0), null, null);
-        Expr laplacian = new Binary(BinaryOperator.MULTIPLY, new Constant((n + 1.0) * (n + 1.0)),
-                new Binary(BinaryOperator.ADD, new Binary(BinaryOperator.SUBTRACT, ModelAssembler.element(u, at(-1)),
-                        new Binary(BinaryOperator.MULTIPLY, new Constant(2), ModelAssembler.element(u, at(0)))),
-                        ModelAssembler.element(u, at(1))));
-        a.familyRate(u, new Binary(BinaryOperator.ADD, laplacian, new Binary(BinaryOperator.MULTIPLY, l,
-                new Call(MathFunction.EXP, List.of(ModelAssembler.element(u, at(0)))))));
-        return a.build(List.of(), List.of());
-    }
-
     private static EquilibriumSearchOutcome search(VectorField field, CompiledModel m) {
         StartPoints starts = StartPoints.build(m.parameters(), m.initialState(), List.of(), FEW_STARTS);
         return new EquilibriumFinder(field, m.parameters(), FEW_STARTS).find(starts, Long.MAX_VALUE, () -> false);
@@ -55,7 +26,7 @@ class SparseNewtonTest {
     @Test
     void bratuLowerSolutionMatchesTheClosedForm() {
         int n = 250;
-        CompiledModel m = ModelCompiler.compile(bratu(n, 1));
+        CompiledModel m = ModelCompiler.compile(LatticeModels.bratu(n, 1));
         assertTrue(m.field().large());
         EquilibriumSearchOutcome sparse = search(m.field(), m);
         // closed form (Bratu 1914; e.g. Ascher, Mattheij & Russell 1995): u(x) = -2 ln(cosh((x - 1/2) θ/2) /
@@ -93,7 +64,7 @@ class SparseNewtonTest {
     void sparseFieldsWithinTheDenseLimitAreClassifiedFromTheSparseJacobian() {
         // 150 states, worked sparse (as indexed models without a dense Jacobian are): the eigenvalues come from
         // the dense matrix assembled from the sparse one
-        CompiledModel m = ModelCompiler.compile(bratu(150, 1));
+        CompiledModel m = ModelCompiler.compile(LatticeModels.bratu(150, 1));
         EquilibriumSearchOutcome sparse = search(Forced.sparse(m.model(), m.field()), m);
         Equilibrium lower = sparse.equilibria().get(0);
         // the lower Bratu solution is linearly stable: J = D² + λ diag(e^u) is negative definite there (closed

@@ -153,4 +153,17 @@ public final class LatticeModels {
         a.familyRate(x, sub(call(MathFunction.TANH, outer), ModelAssembler.element(x, at(0))));
         return a.build(List.of(), List.of());
     }
+    /**
+     * The Bratu problem u'' + λ e^u = 0 on (0, 1), u = 0 at both ends, by the second difference on n interior
+     * points: du_i/dt = (n+1)² (u_{i−1} − 2u_i + u_{i+1}) + λ e^{u_i}, starting from u = 0.
+     */
+    public static DynamicalModel bratu(int n, double lambda) {
+        ModelAssembler a = new ModelAssembler("bratu", null, new TimeAxis("t", null));
+        Variable l = a.parameter("lambda", c(lambda), null, null, null);
+        Family u = a.stateFamily("u", new IndexRange("i", 1, n, false), c(0), null, null);
+        Expr laplacian = mul(c((n + 1.0) * (n + 1.0)), add(sub(ModelAssembler.element(u, at(-1)),
+                mul(c(2), ModelAssembler.element(u, at(0)))), ModelAssembler.element(u, at(1))));
+        a.familyRate(u, add(laplacian, mul(l, call(MathFunction.EXP, ModelAssembler.element(u, at(0))))));
+        return a.build(List.of(), List.of());
+    }
 }

@@ -1,0 +1,170 @@
+package org.phasewright.runtime.continuation;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.phasewright.runtime.TestModels.add;
+import static org.phasewright.runtime.TestModels.c;
+import static org.phasewright.runtime.TestModels.mul;
+import static org.phasewright.runtime.TestModels.sub;
+
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.phasewright.runtime.assemble.ModelAssembler;
+import org.phasewright.runtime.compile.CompiledModel;
+import org.phasewright.runtime.compile.ModelCompiler;
+import org.phasewright.runtime.equilibria.EquilibriumFinder;
+import org.phasewright.runtime.equilibria.EquilibriumSettings;
+import org.phasewright.runtime.equilibria.StartPoints;
+import org.phasewright.runtime.linalg.Forced;
+import org.phasewright.runtime.linalg.LatticeModels;
+import org.phasewright.runtime.model.Constant;
+import org.phasewright.runtime.model.DynamicalModel;
+import org.phasewright.runtime.model.EquilibriumContinuation;
+import org.phasewright.runtime.model.Expr;
+import org.phasewright.runtime.model.Family;
+import org.phasewright.runtime.model.IndexRange;
+import org.phasewright.runtime.model.IndexValue;
+import org.phasewright.runtime.model.Study;
+import org.phasewright.runtime.model.TimeAxis;
+import org.phasewright.runtime.model.Variable;
+import org.phasewright.runtime.study.ContinuationResult;
+import org.phasewright.runtime.study.RunSettings;
+import org.phasewright.runtime.report.TextSummary;
+import org.phasewright.runtime.study.StudyResult;
+import org.phasewright.runtime.study.StudyRunner;
+
+/** Continuation of models above the dense limit (200 states), with the sparse Jacobian. */
+class LargeContinuationTest {
+
+    static Expr at(Family f, int offset) {
+        return ModelAssembler.element(f, add(new IndexValue("i"), c(offset)));
+    }
+
+    static ContinuationResult follow(DynamicalModel model, String parameter, double from, double to) {
+        return run(model, parameter, from, to).continuations().get(0);
+    }
+
+    static StudyResult run(DynamicalModel model, String parameter, double from, double to) {
+        CompiledModel compiled = ModelCompiler.compile(model);
+        assertTrue(compiled.field().large());
+        int index = model.parameters().stream().map(p -> p.name()).toList().indexOf(parameter);
+        Variable p = new Variable(org.phasewright.runtime.model.VariableKind.PARAMETER, index, parameter);
+        Study study = new Study("follow", List.of(new EquilibriumContinuation(p, new Constant(from),
+                new Constant(to))));
+        return StudyRunner.run(compiled, study, RunSettings.DEFAULT);
+    }
+
+    @Test
+    void bratuFoldOnTwoHundredFiftyPoints() {
+        // u'' + λ e^u = 0 on (0, 1), u = 0 at both ends: the lower branch turns back at λ_c = 3.513830719 (from
+        // memory: e.g. Boyd, J. Sci. Comput. 1, 1986, for the 1D problem), with the second difference on 250
+        // interior points a few 1e-5 away (O(h²), h = 1/251). Stable below the fold, one unstable direction above.
+        ContinuationResult r = follow(LatticeModels.bratu(250, 0.5), "lambda", 0.5, 4);
+        assertNotNull(r.continuation(), r.message());
+        List<SpecialPoint> folds = r.continuation().specialPoints().stream()
+                .filter(s -> s.kind() == SpecialPoint.Kind.FOLD).toList();
+        assertEquals(1, folds.size(), r.message());
+        assertEquals(3.513830719, folds.get(0).parameter(), 2e-4);
+        Branch b = r.continuation().branches().get(0);
+        ContinuationPoint first = b.points().get(0), last = b.points().get(b.points().size() - 1);
+        assertEquals("stable", first.classification().type());
+        assertEquals(1, last.classification().unstableDimension(), last.classification().type());
+        assertTrue(r.message().contains("sparse Jacobian"), r.message());
+    }
+
+    @Test
+    void sparseAndDenseFoldsAgreeOnTheSameModel() {
+        // The same 150-point Bratu model followed dense (its own Jacobian) and through the sparse path (the field
+        // forced large): the fold must be the same to the location tolerance.
+        CompiledModel m = ModelCompiler.compile(LatticeModels.bratu(150, 0.5));
+        ParameterVector parameters = new ParameterVector(m.model(), m.parameters(), 0);
+        // Newton from u = 0 reaches the lower solution at λ = 0.5
+        EquilibriumSettings one = new EquilibriumSettings(0, 0, 100, 1000, 1e-10, 1e-9, 1e-6, 1e-7);
+        double[] lower = new EquilibriumFinder(m.field(), m.parameters(), one).find(StartPoints.build(
+                m.parameters(), m.initialState(), List.of(), one), Long.MAX_VALUE, () -> false).equilibria().get(0)
+                .coordinates();
+        double dense = fold(new BranchFollower(m.field(), parameters, 1, 0.5, 4, ContinuationSettings.DEFAULT,
+                Long.MAX_VALUE, () -> false).follow(List.of(lower)));
+        double sparse = fold(new BranchFollower(Forced.sparse(m.model(), m.field()), parameters, 1, 0.5, 4,
+                ContinuationSettings.DEFAULT, Long.MAX_VALUE, () -> false).follow(List.of(lower)));
+        assertEquals(dense, sparse, 1e-7);
+    }
+
+    private static double fold(ContinuationOutcome o) {
+        return o.specialPoints().stream().filter(s -> s.kind() == SpecialPoint.Kind.FOLD).findFirst()
+                .orElseThrow().parameter();
+    }
+
+    /**
+     * A ring of Brusselator cells (Prigogine &amp; Lefever, J. Chem. Phys. 48, 1968): u' = A - (B+1) u + u² v
+     * + D (u_{i-1} - 2u_i + u_{i+1}), v' = B u - u² v + D (v_{i-1} - 2v_i + v_{i+1}), equal diffusion for both.
+     */
+    static DynamicalModel brusselatorRing(int cells, double a, double b, double d) {
+        ModelAssembler m = new ModelAssembler("brusselator-ring", null, new TimeAxis("t", null));
+        Variable pa = m.parameter("A", c(a), null, null, null);
+        Variable pb = m.parameter("B", c(b), null, null, null);
+        Variable pd = m.parameter("D", c(d), null, null, null);
+        IndexRange range = new IndexRange("i", 1, cells, true);
+        Family u = m.stateFamily("u", range, add(c(a), mul(c(0.01), new IndexValue("i"))), null, null);
+        Family v = m.stateFamily("v", range, c(b / a), null, null);
+        Expr u2v = mul(mul(at(u, 0), at(u, 0)), at(v, 0));
+        Expr du = mul(pd, add(sub(at(u, -1), mul(c(2), at(u, 0))), at(u, 1)));
+        Expr dv = mul(pd, add(sub(at(v, -1), mul(c(2), at(v, 0))), at(v, 1)));
+        m.familyRate(u, add(add(sub(pa, mul(add(pb, c(1)), at(u, 0))), u2v), du));
+        m.familyRate(v, add(sub(mul(pb, at(u, 0)), u2v), dv));
+        return m.build(List.of(), List.of());
+    }
+
+    @Test
+    void brusselatorRingLosesStabilityAtTheHopfPointOfItsUniformState() {
+        // Uniform state u = A, v = B/A; the k = 0 block [[B-1, A²], [-B, -A²]] has trace B - 1 - A², so a Hopf
+        // point at B = 1 + A² = 5 for A = 2 with frequency A = 2 (Prigogine & Lefever 1968). Mode k has trace
+        // B - 1 - A² - 4D (1 - cos(2πk/N)), so with D = 50 the next Hopf point (k = ±1) is at B = 5.175, beyond the
+        // interval; with equal diffusion no Turing instability occurs ((1 + A sqrt(Du/Dv))² = 9).
+        StudyResult study = run(brusselatorRing(150, 2, 3, 50), "B", 3, 5.1);
+        ContinuationResult r = study.continuations().get(0);
+        assertNotNull(r.continuation(), r.message());
+        List<SpecialPoint> hopf = r.continuation().specialPoints().stream()
+                .filter(s -> s.kind() == SpecialPoint.Kind.HOPF).toList();
+        // the old test function (real part of the pair nearest the axis) also flagged B = 5.0877, where the k = 0
+        // pair (right of the axis) and the k = ±1 pair (left of it) are equally near
+        assertEquals(1, hopf.size(), r.message());
+        assertEquals(5.0, hopf.get(0).parameter(), 1e-7);
+        assertEquals(2.0, hopf.get(0).frequency(), 1e-6);
+        assertTrue(Double.isNaN(hopf.get(0).firstLyapunovCoefficient()));
+        assertEquals("criticality not computed", hopf.get(0).criticality());
+        assertTrue(r.cycles().isEmpty());
+        // the summary's table of special points keeps the first 16 of the 300 states (our own output rule)
+        String summary = TextSummary.render(study);
+        assertTrue(summary.contains("u[16]  ...  notes"), summary);
+        assertTrue(!summary.contains("u[17]") && summary.contains("criticality not computed, frequency 2"), summary);
+    }
+
+    /** x_i' = λ x_i - x_i³ + D (x_{i-1} - 2x_i + x_{i+1}) on a ring. */
+    static DynamicalModel cubicRing(int cells, double lambda, double d) {
+        ModelAssembler m = new ModelAssembler("cubic-ring", null, new TimeAxis("t", null));
+        Variable l = m.parameter("lambda", c(lambda), null, null, null);
+        Variable pd = m.parameter("D", c(d), null, null, null);
+        Family x = m.stateFamily("x", new IndexRange("i", 1, cells, true), c(0), null, null);
+        Expr cube = mul(mul(at(x, 0), at(x, 0)), at(x, 0));
+        m.familyRate(x, add(sub(mul(l, at(x, 0)), cube), mul(pd, add(sub(at(x, -1), mul(c(2), at(x, 0))),
+                at(x, 1)))));
+        return m.build(List.of(), List.of());
+    }
+
+    @Test
+    void pitchforkOfTheRestingRingIsLocatedAsABranchPoint() {
+        // The rest state x = 0 of every cell: f_u = λ I + D L with eigenvalues λ - 2D (1 - cos θ_k); the uniform
+        // mode k = 0 crosses zero alone at λ = 0, a simple branch point (pitchfork, x -> -x). The modes k = ±1
+        // cross together (a double eigenvalue), which leaves the determinant's sign unchanged.
+        ContinuationResult r = follow(cubicRing(250, -0.5, 1), "lambda", -0.5, 0.5);
+        assertNotNull(r.continuation(), r.message());
+        List<SpecialPoint> branch = r.continuation().specialPoints().stream()
+                .filter(s -> s.kind() == SpecialPoint.Kind.BRANCH_POINT).toList();
+        assertEquals(1, branch.size(), r.message());
+        assertEquals(0.0, branch.get(0).parameter(), 1e-8);
+        assertTrue(r.message().contains("not followed"), r.message());
+    }
+}

@@ -28,9 +28,9 @@ import org.phasewright.runtime.linalg.SparseMatrix;
  * trial. At branch points the other branch is followed in both directions from the second tangent.
  * <p>
  * Large models (above the dense limit) work with the sparse f_u: bordered systems by a sparse LU with the border
- * last, the branch-point test by the sign of that determinant (located by halving), and stability and the Hopf test
- * from the rightmost eigenvalues; branch points are located but the other branch is not followed, and Hopf points
- * get no first Lyapunov coefficient. Not thread-safe.
+ * last, the branch-point test by the sign of that determinant (located by halving), the second tangent at a branch
+ * point by inverse iteration with the bordered matrix, and stability and the Hopf test from the rightmost
+ * eigenvalues; Hopf points get no first Lyapunov coefficient. Not thread-safe.
  */
 public final class BranchFollower {
     private static final int LOCATE_ITERATIONS = 60;
@@ -324,9 +324,6 @@ public final class BranchFollower {
 
     /** Queues the other branch through a branch point, in both directions. */
     private void switchBranches(double[] x, double[] t, int branch) {
-        if (system.sparse()) {
-            return; // the second tangent needs a dense SVD (ContinuationRunner says so)
-        }
         for (double[] seen : branchPointsSeen) {
             if (same(seen, x)) {
                 return;

@@ -104,7 +104,7 @@ final class Corrector {
      */
     double[] secondTangent(double[] x, double[] t) {
         if (system.sparse()) {
-            return null; // the kernel comes from a dense SVD
+            return secondTangentByInverseIteration(x, t);
         }
         double[][] kernel = nullVectors(x, 2);
         double[] best = null;
@@ -128,6 +128,64 @@ final class Corrector {
             best[i] /= bestNorm;
         }
         return best;
+    }
+
+    /**
+     * The same for a large model, without an SVD: near a branch point [H_x; tᵀ] is nearly singular and its null
+     * vector is the kernel vector of H_x orthogonal to t, so two steps of inverse iteration with it (from a fixed
+     * pseudo-random vector whose last entry is 0) give that vector. If the matrix is singular to working precision
+     * at x, a point a hair along t is used. Null when no clearly new direction results.
+     */
+    private double[] secondTangentByInverseIteration(double[] x, double[] t) {
+        double[] at = x;
+        if (!bordered.factor(at, t)) {
+            at = x.clone();
+            double hair = 1e-9 * (1 + normInf(x));
+            for (int i = 0; i <= n; i++) {
+                at[i] += hair * t[i];
+            }
+            if (!bordered.factor(at, t)) {
+                return null;
+            }
+        }
+        java.util.SplittableRandom random = new java.util.SplittableRandom(20_011L);
+        double[] z = new double[n + 1];
+        for (int i = 0; i < n; i++) {
+            z[i] = random.nextDouble() - 0.5;
+        }
+        for (int iteration = 0; iteration < 2; iteration++) {
+            bordered.solve(z);
+            double c = dot(z, t);
+            for (int i = 0; i <= n; i++) {
+                z[i] -= c * t[i];
+            }
+            double norm = norm(z);
+            if (!(norm > 0) || !Double.isFinite(norm)) {
+                return null;
+            }
+            for (int i = 0; i <= n; i++) {
+                z[i] /= norm;
+            }
+            if (iteration == 0) {
+                z[n] = 0; // the next right-hand side: in the rows of H_x only, like the first
+                double s = 0;
+                for (double zi : z) {
+                    s = Math.max(s, Math.abs(zi));
+                }
+                if (s == 0) {
+                    return null;
+                }
+            }
+        }
+        return z;
+    }
+
+    private static double normInf(double[] a) {
+        double m = 0;
+        for (double v : a) {
+            m = Math.max(m, Math.abs(v));
+        }
+        return m;
     }
 
     /** The right singular vectors of H_x (padded to square with a zero row) for the smallest singular values. */

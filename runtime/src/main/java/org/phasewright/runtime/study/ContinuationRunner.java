@@ -106,8 +106,8 @@ final class ContinuationRunner {
         }
         if (large) {
             message += "; a model of " + model.dimension() + " states is followed with its sparse Jacobian: "
-                    + "stability from the rightmost eigenvalues, branch points located but the other branch not "
-                    + "followed, no periodic orbits from Hopf points";
+                    + "stability from the rightmost eigenvalues, no first Lyapunov coefficients and no periodic "
+                    + "orbits from Hopf points";
         }
         if (search.ending() != EquilibriumSearchOutcome.Ending.COMPLETED) {
             message += "; the search at the start " + search.message().replaceFirst("^found [^;]*; ", "");

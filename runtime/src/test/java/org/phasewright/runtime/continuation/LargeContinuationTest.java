@@ -155,16 +155,28 @@ class LargeContinuationTest {
     }
 
     @Test
-    void pitchforkOfTheRestingRingIsLocatedAsABranchPoint() {
+    void pitchforkOfTheRestingRingIsLocatedAndItsOtherBranchFollowed() {
         // The rest state x = 0 of every cell: f_u = λ I + D L with eigenvalues λ - 2D (1 - cos θ_k); the uniform
         // mode k = 0 crosses zero alone at λ = 0, a simple branch point (pitchfork, x -> -x). The modes k = ±1
         // cross together (a double eigenvalue), which leaves the determinant's sign unchanged.
+        // The cells' state is uniform on both branches: the classification is exact (block circulant).
         ContinuationResult r = follow(cubicRing(250, -0.5, 1), "lambda", -0.5, 0.5);
         assertNotNull(r.continuation(), r.message());
         List<SpecialPoint> branch = r.continuation().specialPoints().stream()
                 .filter(s -> s.kind() == SpecialPoint.Kind.BRANCH_POINT).toList();
         assertEquals(1, branch.size(), r.message());
         assertEquals(0.0, branch.get(0).parameter(), 1e-8);
-        assertTrue(r.message().contains("not followed"), r.message());
+        // the other branch through it: x_i = ±sqrt(λ) in every cell (λ x - x³ = 0, no diffusion between equal cells)
+        List<Branch> others = r.continuation().branches().stream().filter(b -> b.origin().startsWith("branch point"))
+                .toList();
+        assertEquals(2, others.size(), r.message());
+        for (Branch b : others) {
+            ContinuationPoint end = b.points().get(b.points().size() - 1);
+            assertEquals(0.5, end.parameter(), 1e-9, b.ending());
+            for (double x : end.state()) {
+                assertEquals(Math.sqrt(0.5), Math.abs(x), 1e-8);
+            }
+            assertEquals("stable node", end.classification().type()); // eigenvalues -2λ - 2D(1 - cos θ_k), real
+        }
     }
 }

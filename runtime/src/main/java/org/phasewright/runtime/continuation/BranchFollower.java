@@ -30,7 +30,7 @@ import org.phasewright.runtime.linalg.SparseMatrix;
  * Large models (above the dense limit) work with the sparse f_u: bordered systems by a sparse LU with the border
  * last, the branch-point test by the sign of that determinant (located by halving), the second tangent at a branch
  * point by inverse iteration with the bordered matrix, and stability and the Hopf test from the rightmost
- * eigenvalues; Hopf points get no first Lyapunov coefficient. Not thread-safe.
+ * eigenvalues. Not thread-safe.
  */
 public final class BranchFollower {
     private static final int LOCATE_ITERATIONS = 60;
@@ -311,9 +311,7 @@ public final class BranchFollower {
         double frequency = Double.NaN, l1 = Double.NaN;
         if (kind == SpecialPoint.Kind.HOPF) {
             frequency = bestTests.frequencies()[Math.max(0, Math.min(rank, bestTests.frequencies().length - 1))];
-            if (!system.sparse()) { // its normal form uses the dense Jacobian and its eigenvectors
-                l1 = FirstLyapunovCoefficient.at(system.field(), system.parameters().at(best[n]), u, frequency);
-            }
+            l1 = FirstLyapunovCoefficient.at(system.field(), system.parameters().at(best[n]), u, frequency);
         }
         specials.add(new SpecialPoint(kind, branch, best[n], u, frequency, l1));
         points.add(point(best, kind));

@@ -106,8 +106,7 @@ final class ContinuationRunner {
         }
         if (large) {
             message += "; a model of " + model.dimension() + " states is followed with its sparse Jacobian: "
-                    + "stability from the rightmost eigenvalues, no first Lyapunov coefficients and no periodic "
-                    + "orbits from Hopf points";
+                    + "stability from the rightmost eigenvalues, no periodic orbits from Hopf points";
         }
         if (search.ending() != EquilibriumSearchOutcome.Ending.COMPLETED) {
             message += "; the search at the start " + search.message().replaceFirst("^found [^;]*; ", "");

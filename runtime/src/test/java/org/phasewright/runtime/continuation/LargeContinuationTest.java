@@ -133,13 +133,20 @@ class LargeContinuationTest {
         assertEquals(1, hopf.size(), r.message());
         assertEquals(5.0, hopf.get(0).parameter(), 1e-7);
         assertEquals(2.0, hopf.get(0).frequency(), 1e-6);
-        assertTrue(Double.isNaN(hopf.get(0).firstLyapunovCoefficient()));
-        assertEquals("criticality not computed", hopf.get(0).criticality());
+        // l1 of the uniform mode with q, p normalised over all 2N states is the single cell's divided by N (each
+        // of the forms is a sum over N cells of terms N^(-2)); the cell's l1 from the dense path, itself checked
+        // against the Hopf normal form in BranchFollowerTest. Negative: supercritical.
+        double cell = FirstLyapunovCoefficient.at(ModelCompiler.compile(brusselatorRing(1, 2, 5, 50)).field(),
+                new double[] {2, 5, 50}, new double[] {2, 2.5}, 2);
+        assertTrue(cell < 0, "cell l1 " + cell);
+        assertEquals(cell / 150, hopf.get(0).firstLyapunovCoefficient(), 1e-5 * Math.abs(cell / 150));
+        assertEquals("supercritical", hopf.get(0).criticality());
         assertTrue(r.cycles().isEmpty());
         // the summary's table of special points keeps the first 16 of the 300 states (our own output rule)
         String summary = TextSummary.render(study);
         assertTrue(summary.contains("u[16]  ...  notes"), summary);
-        assertTrue(!summary.contains("u[17]") && summary.contains("criticality not computed, frequency 2"), summary);
+        assertTrue(!summary.contains("u[17]") && summary.contains("supercritical, first Lyapunov coefficient"),
+                summary);
     }
 
     /** x_i' = λ x_i - x_i³ + D (x_{i-1} - 2x_i + x_{i+1}) on a ring. */

@@ -16,7 +16,7 @@ final class AugmentedSystem {
     private final VectorField field;
     private final ParameterVector parameters;
     private final int n;
-    private final double[] p, u, fPlus, fMinus, jac;
+    private final double[] p, u, fPlus, fMinus, column, jac;
 
     AugmentedSystem(VectorField field, ParameterVector parameters, int parameterCount) {
         this.field = field;
@@ -26,6 +26,7 @@ final class AugmentedSystem {
         this.u = new double[n];
         this.fPlus = new double[n];
         this.fMinus = new double[n];
+        this.column = new double[n];
         this.jac = field.large() ? null : new double[n * n];
     }
 
@@ -62,9 +63,9 @@ final class AugmentedSystem {
         for (int i = 0; i < n; i++) {
             System.arraycopy(jac, i * n, out, i * m, n);
         }
-        parameterColumn(x, fPlus);
+        parameterColumn(x, column);
         for (int i = 0; i < n; i++) {
-            out[i * m + n] = fPlus[i];
+            out[i * m + n] = column[i];
         }
     }
 

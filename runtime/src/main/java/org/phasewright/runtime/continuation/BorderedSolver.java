@@ -68,6 +68,11 @@ interface BorderedSolver {
         private final double[] column;
         private final SparseLu lu;
         private boolean factored;
+        /**
+         * The last row is multiplied by this (the size of f_u over the size of r): a unit tangent row next to large
+         * or tiny f_u entries would win pivots and fill the factors. A positive factor keeps the determinant's sign.
+         */
+        private double rowScale = 1;
 
         Sparse(AugmentedSystem system) {
             this.system = system;
@@ -116,13 +121,24 @@ interface BorderedSolver {
             for (int i = 0; i < n; i++) {
                 values[p.rowEnd(i) - 1] = column[i];
             }
-            System.arraycopy(lastRow, 0, values, p.rowStart(n), n + 1);
+            double big = 0, row = 0;
+            for (int k = 0; k < fu.length; k++) {
+                big = Math.max(big, Math.abs(fu[k]));
+            }
+            for (double r : lastRow) {
+                row = Math.max(row, Math.abs(r));
+            }
+            rowScale = big > 0 && row > 0 ? big / row : 1;
+            for (int j = 0; j <= n; j++) {
+                values[p.rowStart(n) + j] = rowScale * lastRow[j];
+            }
             factored = lu.factor(bordered);
             return factored;
         }
 
         @Override
         public void solve(double[] b) {
+            b[n] *= rowScale; // the last equation was scaled with its row
             lu.solve(b);
         }
 

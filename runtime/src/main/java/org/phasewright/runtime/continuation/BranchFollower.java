@@ -10,6 +10,7 @@ import java.util.function.BooleanSupplier;
 
 import org.phasewright.runtime.compile.VectorField;
 import org.phasewright.runtime.equilibria.LinearStability;
+import org.phasewright.runtime.linalg.RightmostEigenvalues;
 import org.phasewright.runtime.linalg.SparseMatrix;
 
 /**
@@ -49,6 +50,8 @@ public final class BranchFollower {
     private double[] stabilityAt;
     private LinearStability lastStability;
     private double lastScale;
+    /** Neighbouring points have similar spectra: Arnoldi starts from the last point's pole and Ritz vectors. */
+    private final RightmostEigenvalues.Memory eigenMemory = new RightmostEigenvalues.Memory();
 
     private final List<Branch> branches = new ArrayList<>();
     private final List<SpecialPoint> specials = new ArrayList<>();
@@ -238,9 +241,9 @@ public final class BranchFollower {
             out.add(SpecialPoint.Kind.BRANCH_POINT);
         }
         int rank = hopfRank(a, b);
-        // a pair that crosses keeps its rank among the pairs; NaN (no such pair at one end: two real eigenvalues
-        // meeting off the axis) never counts
-        if (Math.signum(a.pair(rank)) * Math.signum(b.pair(rank)) < 0) {
+        // a pair that crosses keeps its rank among the pairs. With a different number of pairs at the two ends a
+        // pair was born from (or split into) two real eigenvalues, off the axis or not, and nothing is claimed.
+        if (a.pairs().length == b.pairs().length && Math.signum(a.pair(rank)) * Math.signum(b.pair(rank)) < 0) {
             out.add(SpecialPoint.Kind.HOPF);
         }
         return out;
@@ -291,8 +294,12 @@ public final class BranchFollower {
             if (ty == null) {
                 break;
             }
-            Tests ts = tests(y, ty);
+            // eigenvalues only when locating a Hopf point (folds and branch points need none)
+            Tests ts = tests(y, ty, kind == SpecialPoint.Kind.HOPF);
             double fs = value(kind, ts, rank);
+            if (Double.isNaN(fs)) { // the pair left the list (or became two real eigenvalues): no Hopf point here
+                return;
+            }
             best = y;
             bestTangent = ty;
             bestTests = ts;
@@ -310,7 +317,7 @@ public final class BranchFollower {
         double[] u = java.util.Arrays.copyOf(best, n);
         double frequency = Double.NaN, l1 = Double.NaN;
         if (kind == SpecialPoint.Kind.HOPF) {
-            frequency = bestTests.frequencies()[Math.max(0, Math.min(rank, bestTests.frequencies().length - 1))];
+            frequency = bestTests.frequencies()[rank]; // the crossing pair's (value() was finite, so it exists)
             l1 = FirstLyapunovCoefficient.at(system.field(), system.parameters().at(best[n]), u, frequency);
         }
         specials.add(new SpecialPoint(kind, branch, best[n], u, frequency, l1));
@@ -384,6 +391,14 @@ public final class BranchFollower {
     }
 
     private Tests tests(double[] x, double[] t) {
+        return tests(x, t, true);
+    }
+
+    /** Without {@code eigenvalues} the pairs are left empty (the fold and branch-point tests need none). */
+    private Tests tests(double[] x, double[] t, boolean eigenvalues) {
+        if (!eigenvalues) {
+            return new Tests(t[n], corrector.branchTest(x, t), new double[0], new double[0]);
+        }
         LinearStability s = stability(x);
         double[] re = s.real(), im = s.imaginary();
         double tolerance = settings.eigenTolerance() * lastScale;
@@ -422,7 +437,8 @@ public final class BranchFollower {
             scale = Math.sqrt(scale);
         } else {
             system.sparseStateJacobian(x, sparseJac);
-            lastStability = LinearStability.ofSparse(sparseJac, settings.eigenTolerance(), this::stopped);
+            lastStability = LinearStability.ofSparse(sparseJac, settings.eigenTolerance(), this::stopped,
+                    eigenMemory);
             for (int i = 0; i < n; i++) {
                 double row = 0;
                 for (int k = sparseJac.pattern().rowStart(i); k < sparseJac.pattern().rowEnd(i); k++) {

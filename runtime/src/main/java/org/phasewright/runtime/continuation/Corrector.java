@@ -95,7 +95,16 @@ final class Corrector {
      * through a fold.
      */
     double branchTest(double[] x, double[] t) {
-        return bordered.factor(x, t) ? bordered.determinantTest() : 0;
+        if (bordered.factor(x, t)) {
+            return bordered.determinantTest();
+        }
+        // singular to working precision: the sign a hair along the branch, so a sign change is not hidden by a 0
+        double[] y = x.clone();
+        double hair = 1e-9 * (1 + normInf(x));
+        for (int i = 0; i <= n; i++) {
+            y[i] += hair * t[i];
+        }
+        return bordered.factor(y, t) ? bordered.determinantTest() : 0;
     }
 
     /**

@@ -42,7 +42,7 @@ public record SpecialPoint(Kind kind, int branch, double parameter, double[] sta
             return null;
         }
         if (Double.isNaN(firstLyapunovCoefficient)) {
-            return "criticality not computed"; // large models: no normal form
+            return "criticality not computed"; // its eigenvectors or solves failed
         }
         if (Double.isInfinite(firstLyapunovCoefficient) || firstLyapunovCoefficient == 0) {
             return "degenerate";

@@ -64,6 +64,12 @@ public final class LinearStability {
      * pieces of work; when it fires the equilibrium is left "not classified".
      */
     public static LinearStability ofSparse(SparseMatrix j, double relativeTolerance, BooleanSupplier stop) {
+        return ofSparse(j, relativeTolerance, stop, null);
+    }
+
+    /** The same, with a {@link RightmostEigenvalues.Memory} kept along a sequence of similar Jacobians. */
+    public static LinearStability ofSparse(SparseMatrix j, double relativeTolerance, BooleanSupplier stop,
+            RightmostEigenvalues.Memory memory) {
         int n = j.dimension();
         if (!j.allFinite()) {
             double[] nan = {Double.NaN};
@@ -86,7 +92,8 @@ public final class LinearStability {
             return new LinearStability(Arrays.copyOf(full.re, keep), Arrays.copyOf(full.im, keep),
                     full.classification);
         }
-        RightmostEigenvalues.Result r = stop.getAsBoolean() ? null : RightmostEigenvalues.of(j, tolerance, stop);
+        RightmostEigenvalues.Result r = stop.getAsBoolean() ? null
+                : RightmostEigenvalues.of(j, tolerance, stop, memory);
         Classification c = r == null || r.real().length == 0 ? null
                 : Classification.ofRightmost(r.real(), r.imaginary(), n, r.allUnstable(), tolerance);
         if (c == null) {

@@ -63,6 +63,20 @@ public final class RightmostEigenvalues {
      * @param zeroTolerance real parts within this of 0 count as zero (absolute)
      */
     public static Result of(SparseMatrix j, double zeroTolerance, BooleanSupplier stop) {
+        return of(j, zeroTolerance, stop, null);
+    }
+
+    /**
+     * What one call leaves for the next on a similar matrix (the points of a continuation branch): the pole that
+     * converged, tried first, and the sum of the wanted Ritz vectors, the next start vector. Not thread-safe.
+     */
+    public static final class Memory {
+        private double pole;
+        private double[] start;
+    }
+
+    /** As {@link #of(SparseMatrix, double, BooleanSupplier)}, starting from what {@code memory} holds (may be null). */
+    public static Result of(SparseMatrix j, double zeroTolerance, BooleanSupplier stop, Memory memory) {
         int n = j.dimension();
         if (!j.allFinite()) {
             return null;
@@ -72,18 +86,35 @@ public final class RightmostEigenvalues {
             return new Result(new double[Math.min(n, WANTED)], new double[Math.min(n, WANTED)], true, false, 0);
         }
         Result best = null;
-        for (double pole : POLES) {
+        double[] poles = POLES;
+        if (memory != null && memory.pole > 0) { // the remembered pole first, then the others in their order
+            poles = new double[POLES.length];
+            poles[0] = memory.pole;
+            int k = 1;
+            for (double pole : POLES) {
+                if (pole != memory.pole && k < poles.length) {
+                    poles[k++] = pole;
+                }
+            }
+        }
+        double[] start = memory != null && memory.start != null && memory.start.length == n ? memory.start : null;
+        for (double pole : poles) {
             double sigma = pole * radius;
             SparseMatrix shifted = shifted(j, sigma);
             SparseLu lu = new SparseLu(shifted.pattern());
             if (!lu.factor(shifted)) {
                 continue; // σ is (numerically) an eigenvalue: try the next pole
             }
-            Result r = new Arnoldi(n, lu, sigma, radius, zeroTolerance, stop).run();
+            Arnoldi arnoldi = new Arnoldi(n, lu, sigma, radius, zeroTolerance, stop, start);
+            Result r = arnoldi.run();
             if (r == null) {
                 return null; // stopped
             }
             if (r.converged()) {
+                if (memory != null) {
+                    memory.pole = pole;
+                    memory.start = arnoldi.wantedSum;
+                }
                 return r;
             }
             if (best == null || r.real().length > best.real().length) {
@@ -131,7 +162,13 @@ public final class RightmostEigenvalues {
         private final double[] w, solved, coefficients;
         private int starts; // start vectors used so far (a new one after each invariant subspace)
 
-        Arnoldi(int n, SparseLu lu, double sigma, double radius, double zeroTolerance, BooleanSupplier stop) {
+        private final double[] firstStart;
+        /** After a converged run: the sum of the wanted Ritz vectors (real parts), a start for a similar matrix. */
+        double[] wantedSum;
+
+        Arnoldi(int n, SparseLu lu, double sigma, double radius, double zeroTolerance, BooleanSupplier stop,
+                double[] firstStart) {
+            this.firstStart = firstStart;
             this.n = n;
             this.lu = lu;
             this.sigma = sigma;
@@ -152,6 +189,13 @@ public final class RightmostEigenvalues {
         /** Null when stopped. */
         Result run() {
             v[0] = startVector(0);
+            if (firstStart != null) { // half the remembered directions, half the fixed start: nothing new is left out
+                double[] remembered = normalised(firstStart);
+                for (int i = 0; i < n; i++) {
+                    v[0][i] += remembered[i];
+                }
+                normalise(v[0]);
+            }
             int kept = 0;
             List<Ritz> last = List.of();
             int restarts = (int) Math.max(1, Math.min(MAX_RESTARTS, WORK / (4.0 * n * m * m)));
@@ -428,7 +472,16 @@ public final class RightmostEigenvalues {
          * The leading {@code take} Ritz values as eigenvalues of J, up to the first that has not converged (so the
          * list has no gaps); all unstable ones are among them once one lies clearly inside the unit circle.
          */
+        private double[] normalised(double[] x) {
+            double[] y = x.clone();
+            normalise(y);
+            return y;
+        }
+
         private Result result(List<Ritz> ritz, int take, boolean converged) {
+            if (converged) {
+                rememberWanted(ritz, take);
+            }
             List<double[]> found = new ArrayList<>();
             boolean allUnstable = false;
             Ritz lastAdded = null;
@@ -451,6 +504,29 @@ public final class RightmostEigenvalues {
                 im[k] = found.get(k)[1];
             }
             return new Result(re, im, converged, allUnstable, radius);
+        }
+
+        /** wantedSum = V · Σ (real parts of the wanted Ritz vectors, each of unit length). */
+        private void rememberWanted(List<Ritz> ritz, int take) {
+            int size = ritz.isEmpty() ? 0 : ritz.get(0).vectorRe.length;
+            double[] y = new double[size];
+            for (int r = 0; r < Math.min(take, ritz.size()); r++) {
+                double[] x = ritz.get(r).vectorRe;
+                double norm = Math.sqrt(dot(x, x));
+                for (int i = 0; i < size && norm > 0; i++) {
+                    y[i] += x[i] / norm;
+                }
+            }
+            double[] sum = new double[n];
+            for (int r = 0; r < size; r++) {
+                double c = y[r];
+                if (c != 0) {
+                    for (int i = 0; i < n; i++) {
+                        sum[i] += c * v[r][i];
+                    }
+                }
+            }
+            wantedSum = dot(sum, sum) > 0 ? sum : null;
         }
 
         /** λ = σ (μ + 1)/(μ − 1) for μ = a + ib. */

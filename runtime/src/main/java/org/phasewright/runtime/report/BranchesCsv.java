@@ -36,7 +36,9 @@ public final class BranchesCsv {
                         row.add(Csv.number(x));
                     }
                     row.add(Boolean.toString(p.stable()));
-                    row.add(Integer.toString(p.classification().unstableDimension()));
+                    var c = p.classification(); // empty when the point could not be classified
+                    boolean known = c.stableDimension() + c.unstableDimension() + c.centreDimension() > 0;
+                    row.add(known ? Integer.toString(c.unstableDimension()) : "");
                     row.add(p.classification().type());
                     row.add(p.special() == null ? "" : p.special().word());
                     Csv.row(out, row);

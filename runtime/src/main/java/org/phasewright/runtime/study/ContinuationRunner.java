@@ -5,7 +5,6 @@ import java.util.List;
 import java.util.Optional;
 
 import org.phasewright.runtime.compile.CompiledModel;
-import org.phasewright.runtime.compile.ModelCompiler;
 import org.phasewright.runtime.compile.SparseJacobian;
 import org.phasewright.runtime.continuation.BranchFollower;
 import org.phasewright.runtime.continuation.ContinuationOutcome;
@@ -43,13 +42,12 @@ final class ContinuationRunner {
                             + model.timeName());
         }
         boolean large = model.field().large();
+        // each point records the whole state, like a row of equilibria.csv before it is reduced
         if (large && (model.dimension() > ReducedOutput.LIMIT || model.field().sparseJacobian() == null)) {
-            // every point of a branch records the whole state and its eigenvalues, and needs a sparse Jacobian
             return new ContinuationResult(null, Status.FAILED, "MODEL_TOO_LARGE", "continuation follows models of "
-                    + "up to " + ReducedOutput.LIMIT + " states with a sparse Jacobian (above "
-                    + SparseJacobian.DENSE_LIMIT + " states; dense up to " + SparseJacobian.DENSE_LIMIT
-                    + ", indexed models up to " + ModelCompiler.INDEXED_DENSE_JACOBIAN_LIMIT + "); this model has "
-                    + model.dimension() + (model.field().sparseJacobian() == null ? " and no sparse Jacobian" : ""));
+                    + "up to " + ReducedOutput.LIMIT + " states (with a sparse Jacobian above "
+                    + SparseJacobian.DENSE_LIMIT + "); this model has " + model.dimension()
+                    + (model.field().sparseJacobian() == null ? " states and no sparse Jacobian" : " states"));
         }
         double[] base = model.parameters();
         double from, to;

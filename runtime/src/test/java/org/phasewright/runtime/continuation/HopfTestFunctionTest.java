@@ -1,0 +1,86 @@
+package org.phasewright.runtime.continuation;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.phasewright.runtime.TestModels.add;
+import static org.phasewright.runtime.TestModels.c;
+import static org.phasewright.runtime.TestModels.mul;
+import static org.phasewright.runtime.TestModels.param;
+import static org.phasewright.runtime.TestModels.parameter;
+import static org.phasewright.runtime.TestModels.state;
+import static org.phasewright.runtime.TestModels.stateVar;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.phasewright.runtime.TestModels;
+import org.phasewright.runtime.compile.CompiledModel;
+import org.phasewright.runtime.compile.ModelCompiler;
+import org.phasewright.runtime.model.DynamicalModel;
+import org.phasewright.runtime.model.Expr;
+import org.phasewright.runtime.model.StateVariable;
+import org.phasewright.runtime.model.Variable;
+
+/**
+ * The Hopf test on linear models u' = A(λ) u built from 2×2 blocks whose eigenvalues are known in closed form
+ * (common practice: a block [[a, b], [c, d]] has eigenvalues (a+d)/2 ± sqrt(((a-d)/2)² + bc)).
+ */
+class HopfTestFunctionTest {
+
+    /** A block [[a0 + a1 λ, b], [c0 + c1 λ, d0 + d1 λ]]. */
+    record Block(double a0, double a1, double b, double c0, double c1, double d0, double d1) {
+    }
+
+    static DynamicalModel model(Block... blocks) {
+        List<StateVariable> states = new ArrayList<>();
+        List<Expr> rates = new ArrayList<>();
+        Variable l = param(0, "lambda");
+        for (int k = 0; k < blocks.length; k++) {
+            states.add(stateVar("x" + k, 0));
+            states.add(stateVar("y" + k, 0));
+        }
+        for (int k = 0; k < blocks.length; k++) {
+            Block b = blocks[k];
+            Variable x = state(2 * k, "x" + k), y = state(2 * k + 1, "y" + k);
+            Expr a = add(c(b.a0()), mul(c(b.a1()), l)), cc = add(c(b.c0()), mul(c(b.c1()), l));
+            Expr d = add(c(b.d0()), mul(c(b.d1()), l));
+            rates.add(add(mul(a, x), mul(c(b.b()), y)));
+            rates.add(add(mul(cc, x), mul(d, y)));
+        }
+        return TestModels.model("linear", states, List.of(parameter("lambda", c(0))), List.of(), rates);
+    }
+
+    static List<SpecialPoint> hopf(DynamicalModel m, double from, double to) {
+        CompiledModel cm = ModelCompiler.compile(m);
+        ContinuationOutcome o = new BranchFollower(cm.field(), new ParameterVector(m, cm.parameters(), 0), 1, from,
+                to, ContinuationSettings.DEFAULT, Long.MAX_VALUE, () -> false)
+                .follow(List.of(new double[cm.field().dimension()]));
+        return o.specialPoints().stream().filter(s -> s.kind() == SpecialPoint.Kind.HOPF).toList();
+    }
+
+    static final Block STABLE_FOCUS = new Block(-1, 0, 1, -1, 0, -1, 0); // -1 ± i
+    static final Block UNSTABLE_FOCUS = new Block(0.3, 0, 1, -4, 0, 0.3, 0); // 0.3 ± 2i
+    /** 0.45 ± sqrt(λ): two real eigenvalues right of the axis for λ > 0, a pair right of it for λ < 0. */
+    static final Block REALS_TO_PAIR = new Block(0.45, 0, 1, 0, 1, 0.45, 0);
+
+    @Test
+    void aPairBornOffTheAxisIsNoHopfPoint() {
+        // at λ = 0 two unstable real eigenvalues meet and leave as a pair with real part 0.45: nothing crosses the
+        // imaginary axis, with or without other pairs present, in either direction
+        assertEquals(0, hopf(model(REALS_TO_PAIR, STABLE_FOCUS), 0.04, -0.04).size());
+        assertEquals(0, hopf(model(REALS_TO_PAIR, STABLE_FOCUS, UNSTABLE_FOCUS), 0.04, -0.04).size());
+        assertEquals(0, hopf(model(REALS_TO_PAIR, STABLE_FOCUS), -0.04, 0.04).size());
+    }
+
+    @Test
+    void pairsCrossingTheAxisAreEachLocatedWithTheirFrequencies() {
+        // re = λ with frequency 1, and re = λ - 0.2 with frequency 3: Hopf points at λ = 0 and λ = 0.2
+        Block first = new Block(0, 1, 1, -1, 0, 0, 1), second = new Block(-0.2, 1, 1, -9, 0, -0.2, 1);
+        List<SpecialPoint> points = hopf(model(first, second, STABLE_FOCUS), -0.5, 0.5);
+        assertEquals(2, points.size());
+        assertEquals(0.0, points.get(0).parameter(), 1e-9);
+        assertEquals(1.0, points.get(0).frequency(), 1e-9);
+        assertEquals(0.2, points.get(1).parameter(), 1e-9);
+        assertEquals(3.0, points.get(1).frequency(), 1e-9);
+    }
+}

@@ -2,6 +2,7 @@ package org.phasewright.runtime.continuation;
 
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.SingularValueDecomposition;
+import org.phasewright.runtime.linalg.Vectors;
 
 /**
  * The geometry of the solution curve H(x) = 0 in (u, λ) space: unit tangents from the bordered system
@@ -100,7 +101,7 @@ final class Corrector {
         }
         // singular to working precision: the sign a hair along the branch, so a sign change is not hidden by a 0
         double[] y = x.clone();
-        double hair = 1e-9 * (1 + normInf(x));
+        double hair = 1e-9 * (1 + Vectors.normInf(x));
         for (int i = 0; i <= n; i++) {
             y[i] += hair * t[i];
         }
@@ -149,7 +150,7 @@ final class Corrector {
         double[] at = x;
         if (!bordered.factor(at, t)) {
             at = x.clone();
-            double hair = 1e-9 * (1 + normInf(x));
+            double hair = 1e-9 * (1 + Vectors.normInf(x));
             for (int i = 0; i <= n; i++) {
                 at[i] += hair * t[i];
             }
@@ -177,24 +178,12 @@ final class Corrector {
             }
             if (iteration == 0) {
                 z[n] = 0; // the next right-hand side: in the rows of H_x only, like the first
-                double s = 0;
-                for (double zi : z) {
-                    s = Math.max(s, Math.abs(zi));
-                }
-                if (s == 0) {
+                if (Vectors.normInf(z) == 0) {
                     return null;
                 }
             }
         }
         return z;
-    }
-
-    private static double normInf(double[] a) {
-        double m = 0;
-        for (double v : a) {
-            m = Math.max(m, Math.abs(v));
-        }
-        return m;
     }
 
     /** The right singular vectors of H_x (padded to square with a zero row) for the smallest singular values. */

@@ -114,7 +114,13 @@ final class BifurcationDiagram {
         labels.forEach(plot::addAnnotation);
         LegendItemCollection legend = new LegendItemCollection();
         legend.add(item("stable equilibria (solid)", equilibria, SOLID));
-        legend.add(item("unstable equilibria (dashed)", equilibria, DASHED));
+        // a point that could not be classified (a large model whose eigenvalues did not converge) is not called
+        // stable, so it is drawn dashed too: the legend says so when there is one
+        boolean unclassified = result.continuation().branches().stream().flatMap(b -> b.points().stream())
+                .map(ContinuationPoint::classification)
+                .anyMatch(c -> c.stableDimension() + c.unstableDimension() + c.centreDimension() == 0);
+        legend.add(item(unclassified ? "unstable or unclassified equilibria (dashed)" : "unstable equilibria (dashed)",
+                equilibria, DASHED));
         if (!result.cycles().isEmpty()) {
             legend.add(item("stable periodic orbits, largest value (solid)", cycles, SOLID));
             legend.add(item("unstable periodic orbits, largest value (dashed)", cycles, DASHED));

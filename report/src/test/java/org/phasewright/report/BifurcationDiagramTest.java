@@ -14,10 +14,13 @@ import org.jfree.chart.plot.XYPlot;
 import org.junit.jupiter.api.Test;
 import org.phasewright.runtime.compile.CompiledModel;
 import org.phasewright.runtime.compile.ModelCompiler;
+import org.phasewright.runtime.continuation.Branch;
 import org.phasewright.runtime.continuation.BranchFollower;
 import org.phasewright.runtime.continuation.ContinuationOutcome;
+import org.phasewright.runtime.continuation.ContinuationPoint;
 import org.phasewright.runtime.continuation.ContinuationSettings;
 import org.phasewright.runtime.continuation.ParameterVector;
+import org.phasewright.runtime.equilibria.Classification;
 import org.phasewright.runtime.model.Binary;
 import org.phasewright.runtime.model.BinaryOperator;
 import org.phasewright.runtime.model.Constant;
@@ -75,5 +78,22 @@ class BifurcationDiagramTest {
         XYTextAnnotation fold = (XYTextAnnotation) plot.getAnnotations().get(0);
         assertEquals(0.0, fold.getX(), 1e-9); // at r = 0 (Strogatz §3.1)
         assertTrue(chart.getXYPlot().getFixedLegendItems().getItemCount() >= 2);
+        assertEquals("unstable equilibria (dashed)", chart.getXYPlot().getFixedLegendItems().get(1).getLabel());
+    }
+
+    @Test
+    void unclassifiedPointsAreDashedAndTheLegendSaysSo() {
+        // our own drawing rule: a point whose stability is unknown is not drawn as stable
+        ContinuationPoint known = new ContinuationPoint(0, new double[] {-1}, new double[] {-2}, new double[] {0},
+                new Classification("stable node", 1, 0, 0), null);
+        ContinuationPoint unknown = new ContinuationPoint(0.5, new double[] {-0.7}, new double[0], new double[0],
+                new Classification("not classified: the rightmost of its 1 eigenvalues did not converge", 0, 0, 0),
+                null);
+        ContinuationOutcome o = new ContinuationOutcome("r", 0, 1, ContinuationOutcome.Ending.COMPLETED,
+                List.of(new Branch(1, "start", List.of(known, unknown), "reached r = 1")), List.of(), 2);
+        JFreeChart chart = BifurcationDiagram.chart(new ContinuationResult(o, Status.COMPLETED, "COMPLETED",
+                o.message()), 0, "r", "x", "title", null);
+        assertEquals("unstable or unclassified equilibria (dashed)",
+                chart.getXYPlot().getFixedLegendItems().get(1).getLabel());
     }
 }

@@ -439,13 +439,7 @@ public final class BranchFollower {
             system.sparseStateJacobian(x, sparseJac);
             lastStability = LinearStability.ofSparse(sparseJac, settings.eigenTolerance(), this::stopped,
                     eigenMemory);
-            for (int i = 0; i < n; i++) {
-                double row = 0;
-                for (int k = sparseJac.pattern().rowStart(i); k < sparseJac.pattern().rowEnd(i); k++) {
-                    row += Math.abs(sparseJac.values()[k]);
-                }
-                scale = Math.max(scale, row);
-            }
+            scale = sparseJac.weightedRowNorm(null);
         }
         lastScale = scale;
         stabilityAt = x.clone();

@@ -75,15 +75,7 @@ public final class LinearStability {
             double[] nan = {Double.NaN};
             return new LinearStability(nan, nan.clone(), Classification.of(nan, nan, 0));
         }
-        double scale = 0;
-        for (int i = 0; i < n; i++) {
-            double row = 0;
-            for (int k = j.pattern().rowStart(i); k < j.pattern().rowEnd(i); k++) {
-                row += Math.abs(j.values()[k]);
-            }
-            scale = Math.max(scale, row);
-        }
-        double tolerance = relativeTolerance * scale;
+        double tolerance = relativeTolerance * j.weightedRowNorm(null); // the Gershgorin bound of J
         // cells must agree far below the zero threshold, so that what is called circulant has cell 0's spectrum
         double[][] all = BlockCirculantSpectrum.of(j, 1e-3 * tolerance, stop);
         if (all != null) {

@@ -81,7 +81,7 @@ public final class RightmostEigenvalues {
         if (!j.allFinite()) {
             return null;
         }
-        double radius = gershgorinRadius(j);
+        double radius = j.weightedRowNorm(null); // the Gershgorin bound: max_i Σ_j |J_ij|
         if (radius == 0) { // the zero matrix: every eigenvalue is 0
             return new Result(new double[Math.min(n, WANTED)], new double[Math.min(n, WANTED)], true, false, 0);
         }
@@ -122,19 +122,6 @@ public final class RightmostEigenvalues {
             }
         }
         return best;
-    }
-
-    private static double gershgorinRadius(SparseMatrix j) {
-        SparsePattern p = j.pattern();
-        double radius = 0;
-        for (int i = 0; i < p.dimension(); i++) {
-            double row = 0;
-            for (int k = p.rowStart(i); k < p.rowEnd(i); k++) {
-                row += Math.abs(j.values()[k]);
-            }
-            radius = Math.max(radius, row);
-        }
-        return radius;
     }
 
     /** J − σI on J's pattern with the diagonal added. */

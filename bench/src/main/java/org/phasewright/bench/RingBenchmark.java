@@ -58,7 +58,9 @@ public final class RingBenchmark {
         // what a study's explicit method runs: tile by tile on all processors for a lattice this large
         int workers = Runtime.getRuntime().availableProcessors();
         Integrator integrator = ExplicitMethod.create(model, model.parameters(), workers);
-        String method = integrator instanceof TiledDormandPrince54 ? "tiled, " + workers + " workers" : "whole state";
+        String method = integrator instanceof TiledDormandPrince54
+                ? "tiled, " + workers + (workers == 1 ? " worker" : " workers")
+                : "whole state";
         double[] u0 = model.initialState();
 
         start = System.nanoTime();

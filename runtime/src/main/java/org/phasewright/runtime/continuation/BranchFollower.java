@@ -23,7 +23,7 @@ import org.phasewright.runtime.linalg.SparseMatrix;
  * <li>branch point: det [f_u f_λ; tᵀ] changes sign (it keeps its sign through a fold);</li>
  * <li>Hopf: a complex eigenvalue pair crosses the imaginary axis: the k-th largest real part among the pairs
  * changes sign, k fixed by how many pairs lie right of the axis (real pairs ±μ, the neutral saddles that the
- * bialternate product also flags, never count).</li>
+ * bialternate product also flags, never count); when several pairs cross within one step, each is located.</li>
  * </ul>
  * Each is located by the Illinois variant of regula falsi on the arclength, correcting onto the curve at every
  * trial. At branch points the other branch is followed in both directions from the second tangent.
@@ -187,8 +187,17 @@ public final class BranchFollower {
             }
             Tests nextTests = tests(next, tNext);
             boolean outside = next[n] < lo || next[n] > hi;
-            for (SpecialPoint.Kind kind : changes(tests, nextTests)) {
-                locate(kind, x, t, h, tests, nextTests, number, points);
+            List<Located> located = new ArrayList<>();
+            for (Change change : changes(tests, nextTests)) {
+                Located l = locate(change, x, t, h, tests, nextTests, number);
+                if (l != null) {
+                    located.add(l);
+                }
+            }
+            located.sort(java.util.Comparator.comparingDouble(Located::arclength)); // several in one step
+            for (Located l : located) {
+                specials.add(l.special());
+                points.add(l.point());
             }
             if (outside) {
                 double[] boundary = boundary(x, next);
@@ -232,39 +241,46 @@ public final class BranchFollower {
         return Math.min(size, alongLambda);
     }
 
-    private List<SpecialPoint.Kind> changes(Tests a, Tests b) {
-        List<SpecialPoint.Kind> out = new ArrayList<>();
+    /** A test function that changes sign between two points; for Hopf, the rank of the crossing pair (else -1). */
+    private record Change(SpecialPoint.Kind kind, int rank) {
+    }
+
+    /** A located special point, at this arclength from the step's start. */
+    private record Located(double arclength, SpecialPoint special, ContinuationPoint point) {
+    }
+
+    private List<Change> changes(Tests a, Tests b) {
+        List<Change> out = new ArrayList<>();
         if (Math.signum(a.fold()) * Math.signum(b.fold()) < 0) {
-            out.add(SpecialPoint.Kind.FOLD);
+            out.add(new Change(SpecialPoint.Kind.FOLD, -1));
         }
         if (Math.signum(a.branch()) * Math.signum(b.branch()) < 0) {
-            out.add(SpecialPoint.Kind.BRANCH_POINT);
+            out.add(new Change(SpecialPoint.Kind.BRANCH_POINT, -1));
         }
-        int rank = hopfRank(a, b);
-        // a pair that crosses keeps its rank among the pairs. With a different number of pairs at the two ends a
-        // pair was born from (or split into) two real eigenvalues, off the axis or not, and nothing is claimed.
-        if (a.pairs().length == b.pairs().length && Math.signum(a.pair(rank)) * Math.signum(b.pair(rank)) < 0) {
-            out.add(SpecialPoint.Kind.HOPF);
+        // A pair that crosses keeps its rank among the pairs; when the count of pairs in the right half-plane goes
+        // from k to m, the pairs of ranks min(k, m) .. max(k, m) - 1 crossed, each at its own Hopf point. With a
+        // different number of pairs at the two ends a pair was born from (or split into) two real eigenvalues, off
+        // the axis or not, and nothing is claimed.
+        if (a.pairs().length == b.pairs().length) {
+            int before = a.unstablePairs(), after = b.unstablePairs();
+            for (int rank = Math.min(before, after); rank < Math.max(before, after); rank++) {
+                if (Math.signum(a.pair(rank)) * Math.signum(b.pair(rank)) < 0) {
+                    out.add(new Change(SpecialPoint.Kind.HOPF, rank));
+                }
+            }
         }
         return out;
     }
 
     /**
-     * The rank of the pair that crosses the imaginary axis between a and b: when the count of pairs in the right
-     * half-plane grows it is the first pair still on the left at a, when it shrinks the last one on the right.
+     * Regula falsi (Illinois) for the zero of one test function on the arclength s in (0, h) from x along t: the
+     * special point and its point on the branch, with its arclength (several in one step are recorded in arclength
+     * order), or null when none was found.
      */
-    private static int hopfRank(Tests a, Tests b) {
-        int before = a.unstablePairs(), after = b.unstablePairs();
-        return after > before ? before : after < before ? before - 1 : -1;
-    }
-
-    /**
-     * Regula falsi (Illinois) for the zero of one test function on the arclength s in (0, h) from x along t.
-     * The located point is recorded, in arclength order, with the points of the branch.
-     */
-    private void locate(SpecialPoint.Kind kind, double[] x, double[] t, double h, Tests at0, Tests atH, int branch,
-            List<ContinuationPoint> points) {
-        int rank = kind == SpecialPoint.Kind.HOPF ? hopfRank(at0, atH) : -1;
+    private Located locate(Change change, double[] x, double[] t, double h, Tests at0, Tests atH, int branch) {
+        SpecialPoint.Kind kind = change.kind();
+        int rank = change.rank();
+        double bestArclength = 0;
         RegulaFalsiBracket bracket = new RegulaFalsiBracket(0, value(kind, at0, rank), h, value(kind, atH, rank));
         double[] predicted = new double[n + 1];
         double[] best = null;
@@ -298,9 +314,10 @@ public final class BranchFollower {
             Tests ts = tests(y, ty, kind == SpecialPoint.Kind.HOPF);
             double fs = value(kind, ts, rank);
             if (Double.isNaN(fs)) { // the pair left the list (or became two real eigenvalues): no Hopf point here
-                return;
+                return null;
             }
             best = y;
+            bestArclength = s;
             bestTangent = ty;
             bestTests = ts;
             if (fs == 0 || bracket.width() <= 1e-13 * (1 + maxAbs(y, n + 1))) {
@@ -312,7 +329,7 @@ public final class BranchFollower {
             }
         }
         if (best == null || best[n] < lo || best[n] > hi) {
-            return;
+            return null;
         }
         double[] u = java.util.Arrays.copyOf(best, n);
         double frequency = Double.NaN, l1 = Double.NaN;
@@ -320,11 +337,12 @@ public final class BranchFollower {
             frequency = bestTests.frequencies()[rank]; // the crossing pair's (value() was finite, so it exists)
             l1 = FirstLyapunovCoefficient.at(system.field(), system.parameters().at(best[n]), u, frequency);
         }
-        specials.add(new SpecialPoint(kind, branch, best[n], u, frequency, l1));
-        points.add(point(best, kind));
+        Located located = new Located(bestArclength, new SpecialPoint(kind, branch, best[n], u, frequency, l1),
+                point(best, kind));
         if (kind == SpecialPoint.Kind.BRANCH_POINT) {
             switchBranches(best, bestTangent, branch);
         }
+        return located;
     }
 
     /** Queues the other branch through a branch point, in both directions. */

@@ -1,6 +1,7 @@
 package org.phasewright.runtime.continuation;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.phasewright.runtime.TestModels.add;
 import static org.phasewright.runtime.TestModels.c;
 import static org.phasewright.runtime.TestModels.mul;
@@ -50,12 +51,25 @@ class HopfTestFunctionTest {
         return TestModels.model("linear", states, List.of(parameter("lambda", c(0))), List.of(), rates);
     }
 
-    static List<SpecialPoint> hopf(DynamicalModel m, double from, double to) {
+    static ContinuationOutcome follow(DynamicalModel m, double from, double to) {
         CompiledModel cm = ModelCompiler.compile(m);
-        ContinuationOutcome o = new BranchFollower(cm.field(), new ParameterVector(m, cm.parameters(), 0), 1, from,
-                to, ContinuationSettings.DEFAULT, Long.MAX_VALUE, () -> false)
+        return new BranchFollower(cm.field(), new ParameterVector(m, cm.parameters(), 0), 1, from, to,
+                ContinuationSettings.DEFAULT, Long.MAX_VALUE, () -> false)
                 .follow(List.of(new double[cm.field().dimension()]));
-        return o.specialPoints().stream().filter(s -> s.kind() == SpecialPoint.Kind.HOPF).toList();
+    }
+
+    static List<SpecialPoint> hopf(DynamicalModel m, double from, double to) {
+        return follow(m, from, to).specialPoints().stream().filter(s -> s.kind() == SpecialPoint.Kind.HOPF).toList();
+    }
+
+    /** The branch u = 0 of a linear model runs straight from {@code from} to {@code to}: λ along it is monotone. */
+    static void assertPointsInOrder(ContinuationOutcome o, double from, double to) {
+        assertEquals(1, o.branches().size());
+        List<ContinuationPoint> points = o.branches().get(0).points();
+        for (int i = 1; i < points.size(); i++) {
+            double step = points.get(i).parameter() - points.get(i - 1).parameter();
+            assertTrue(step * Math.signum(to - from) >= 0, "point " + i + " goes back");
+        }
     }
 
     static final Block STABLE_FOCUS = new Block(-1, 0, 1, -1, 0, -1, 0); // -1 ± i
@@ -82,5 +96,46 @@ class HopfTestFunctionTest {
         assertEquals(1.0, points.get(0).frequency(), 1e-9);
         assertEquals(0.2, points.get(1).parameter(), 1e-9);
         assertEquals(3.0, points.get(1).frequency(), 1e-9);
+    }
+
+    @Test
+    void twoPairsCrossingWithinOneStepAreBothLocatedInOrder() {
+        // re = λ with frequency 1 and re = λ - 0.0001 with frequency 3: both cross inside one continuation step
+        // (the steps are some hundredths of the interval), each at its own Hopf point, found in the order met
+        Block first = new Block(0, 1, 1, -1, 0, 0, 1), second = new Block(-0.0001, 1, 1, -9, 0, -0.0001, 1);
+        DynamicalModel m = model(first, second, STABLE_FOCUS);
+        List<SpecialPoint> up = hopf(m, -0.5, 0.5);
+        assertEquals(2, up.size());
+        assertEquals(0.0, up.get(0).parameter(), 1e-9);
+        assertEquals(1.0, up.get(0).frequency(), 1e-9);
+        assertEquals(0.0001, up.get(1).parameter(), 1e-9);
+        assertEquals(3.0, up.get(1).frequency(), 1e-9);
+        List<SpecialPoint> down = hopf(m, 0.5, -0.5);
+        assertEquals(2, down.size());
+        assertPointsInOrder(follow(m, -0.5, 0.5), -0.5, 0.5);
+        assertPointsInOrder(follow(m, 0.5, -0.5), 0.5, -0.5);
+        assertEquals(0.0001, down.get(0).parameter(), 1e-9);
+        assertEquals(3.0, down.get(0).frequency(), 1e-9);
+        assertEquals(0.0, down.get(1).parameter(), 1e-9);
+        assertEquals(1.0, down.get(1).frequency(), 1e-9);
+    }
+
+    @Test
+    void twoPairsCrossingWithinOneStepAreBothLocatedInALargeModel() {
+        // the same two crossing pairs among 101 stable foci -1 - 0.01k ± (1 + 0.05k) i: 206 states, so the test
+        // reads the rightmost eigenvalues of the sparse Jacobian instead of the full spectrum
+        List<Block> blocks = new ArrayList<>();
+        blocks.add(new Block(0, 1, 1, -1, 0, 0, 1));
+        blocks.add(new Block(-0.0001, 1, 1, -9, 0, -0.0001, 1));
+        for (int k = 0; k < 101; k++) {
+            double re = -1 - 0.01 * k, im = 1 + 0.05 * k;
+            blocks.add(new Block(re, 0, 1, -im * im, 0, re, 0));
+        }
+        List<SpecialPoint> points = hopf(model(blocks.toArray(Block[]::new)), -0.5, 0.5);
+        assertEquals(2, points.size());
+        assertEquals(0.0, points.get(0).parameter(), 1e-8);
+        assertEquals(1.0, points.get(0).frequency(), 1e-8);
+        assertEquals(0.0001, points.get(1).parameter(), 1e-8);
+        assertEquals(3.0, points.get(1).frequency(), 1e-8);
     }
 }

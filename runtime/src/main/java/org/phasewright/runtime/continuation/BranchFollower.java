@@ -2,6 +2,7 @@ package org.phasewright.runtime.continuation;
 
 import java.util.ArrayDeque;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Comparator;
 import java.util.Deque;
 import java.util.List;
@@ -68,9 +69,13 @@ public final class BranchFollower {
      * Test-function values at one point. {@code pairs} holds the real parts of the complex-conjugate pairs,
      * largest first, and {@code frequencies} their imaginary parts: a Hopf point is where the k-th largest of these
      * real parts crosses zero (an order statistic, continuous even when pairs overtake one another, unlike the real
-     * part of the pair nearest the axis, which jumps where two pairs straddle it).
+     * part of the pair nearest the axis, which jumps where two pairs straddle it). {@code unstableReals} counts the
+     * real eigenvalues right of the axis; {@code complete} says whether the list holds every eigenvalue, and
+     * {@code allUnstableListed} whether it holds at least every one right of the axis (a large model's rightmost
+     * eigenvalues when one of them is stable).
      */
-    private record Tests(double fold, double branch, double[] pairs, double[] frequencies) {
+    private record Tests(double fold, double branch, double[] pairs, double[] frequencies, int unstableReals,
+            boolean complete, boolean allUnstableListed) {
         int unstablePairs() {
             int count = 0;
             for (double re : pairs) {
@@ -258,10 +263,15 @@ public final class BranchFollower {
             out.add(new Change(SpecialPoint.Kind.BRANCH_POINT, -1));
         }
         // A pair that crosses keeps its rank among the pairs; when the count of pairs in the right half-plane goes
-        // from k to m, the pairs of ranks min(k, m) .. max(k, m) - 1 crossed, each at its own Hopf point. With a
-        // different number of pairs at the two ends a pair was born from (or split into) two real eigenvalues, off
-        // the axis or not, and nothing is claimed.
-        if (a.pairs().length == b.pairs().length) {
+        // from k to m, the pairs of ranks min(k, m) .. max(k, m) - 1 crossed, each at its own Hopf point. A pair can
+        // also enter or leave the right half-plane by being born from (or splitting into) two real eigenvalues
+        // there, off the axis: nothing is claimed then. That is known when the count of real eigenvalues right of
+        // the axis changed, or, with every eigenvalue listed, when the count of pairs did. (A large model lists only
+        // its rightmost eigenvalues, whose pairs come and go at the bottom of the list as the spectrum moves.)
+        boolean sameUnstableReals = a.allUnstableListed() && b.allUnstableListed()
+                && a.unstableReals() == b.unstableReals();
+        boolean samePairs = a.complete() && b.complete() && a.pairs().length == b.pairs().length;
+        if (sameUnstableReals || samePairs) {
             int before = a.unstablePairs(), after = b.unstablePairs();
             for (int rank = Math.min(before, after); rank < Math.max(before, after); rank++) {
                 if (Math.signum(a.pair(rank)) * Math.signum(b.pair(rank)) < 0) {
@@ -331,7 +341,7 @@ public final class BranchFollower {
         if (best == null || best[n] < lo || best[n] > hi) {
             return null;
         }
-        double[] u = java.util.Arrays.copyOf(best, n);
+        double[] u = Arrays.copyOf(best, n);
         double frequency = Double.NaN, l1 = Double.NaN;
         if (kind == SpecialPoint.Kind.HOPF) {
             frequency = bestTests.frequencies()[rank]; // the crossing pair's (value() was finite, so it exists)
@@ -415,17 +425,22 @@ public final class BranchFollower {
     /** Without {@code eigenvalues} the pairs are left empty (the fold and branch-point tests need none). */
     private Tests tests(double[] x, double[] t, boolean eigenvalues) {
         if (!eigenvalues) {
-            return new Tests(t[n], corrector.branchTest(x, t), new double[0], new double[0]);
+            return new Tests(t[n], corrector.branchTest(x, t), new double[0], new double[0], 0, false, false);
         }
         LinearStability s = stability(x);
         double[] re = s.real(), im = s.imaginary();
         double tolerance = settings.eigenTolerance() * lastScale;
         // one entry per pair (its +b member); real parts come sorted, largest first
         List<double[]> pairs = new ArrayList<>();
+        int unstableReals = 0;
+        double lowest = Double.POSITIVE_INFINITY;
         for (int k = 0; k < re.length; k++) {
             if (im[k] > tolerance) {
                 pairs.add(new double[] {re[k], im[k]});
+            } else if (Math.abs(im[k]) <= tolerance && re[k] > 0) {
+                unstableReals++;
             }
+            lowest = Math.min(lowest, re[k]);
         }
         pairs.sort(Comparator.comparingDouble((double[] p) -> -p[0]));
         double[] real = new double[pairs.size()], frequency = new double[pairs.size()];
@@ -433,7 +448,9 @@ public final class BranchFollower {
             real[k] = pairs.get(k)[0];
             frequency[k] = pairs.get(k)[1];
         }
-        return new Tests(t[n], corrector.branchTest(x, t), real, frequency);
+        boolean complete = re.length == n;
+        return new Tests(t[n], corrector.branchTest(x, t), real, frequency, unstableReals, complete,
+                complete || lowest < 0);
     }
 
     /**
@@ -442,7 +459,7 @@ public final class BranchFollower {
      * Frobenius norm, or the largest absolute row sum).
      */
     private LinearStability stability(double[] x) {
-        if (stabilityAt != null && java.util.Arrays.equals(stabilityAt, x)) {
+        if (stabilityAt != null && Arrays.equals(stabilityAt, x)) {
             return lastStability;
         }
         double scale = 0;
@@ -470,7 +487,7 @@ public final class BranchFollower {
 
     private ContinuationPoint point(double[] x, SpecialPoint.Kind special) {
         LinearStability s = stability(x);
-        return new ContinuationPoint(x[n], java.util.Arrays.copyOf(x, n), s.real(), s.imaginary(),
+        return new ContinuationPoint(x[n], Arrays.copyOf(x, n), s.real(), s.imaginary(),
                 s.classification(), special);
     }
 
@@ -478,7 +495,7 @@ public final class BranchFollower {
     private boolean covered(double[] x) {
         for (Branch b : branches) {
             for (ContinuationPoint p : b.points()) {
-                double[] y = java.util.Arrays.copyOf(p.state(), n + 1);
+                double[] y = Arrays.copyOf(p.state(), n + 1);
                 y[n] = p.parameter();
                 if (same(x, y)) {
                     return true;

@@ -138,4 +138,37 @@ class HopfTestFunctionTest {
         assertEquals(0.0001, points.get(1).parameter(), 1e-8);
         assertEquals(3.0, points.get(1).frequency(), 1e-8);
     }
+
+    @Test
+    void aHopfPointIsFoundWhileEigenvaluesEnterTheBottomOfALargeModelsList() {
+        // re = λ with frequency 1 crosses at λ = 0 while two real eigenvalues -1.045 - 20λ and -1.046 - 20λ fall
+        // through the bottom of the list of rightmost eigenvalues, so the two ends of that step list different
+        // numbers of pairs (a stable pair enters the list as the reals leave it). Stable foci -1 - 0.01k ± i; the
+        // Hopf point is the one of the crossing pair alone (block eigenvalues in closed form, as above).
+        List<Block> blocks = new ArrayList<>();
+        blocks.add(new Block(0, 1, 1, -1, 0, 0, 1));
+        blocks.add(new Block(-1.045, -20, 0, 0, 0, -1.046, -20));
+        for (int k = 0; k < 100; k++) {
+            double re = -1 - 0.01 * k;
+            blocks.add(new Block(re, 0, 1, -1, 0, re, 0));
+        }
+        List<SpecialPoint> points = hopf(model(blocks.toArray(Block[]::new)), -0.5, 0.5);
+        assertEquals(1, points.size());
+        assertEquals(0.0, points.get(0).parameter(), 1e-8);
+        assertEquals(1.0, points.get(0).frequency(), 1e-8);
+    }
+
+    @Test
+    void aPairBornOffTheAxisIsNoHopfPointInALargeModelEither() {
+        // REALS_TO_PAIR among 102 stable foci: 206 states, only the rightmost eigenvalues listed
+        List<Block> blocks = new ArrayList<>();
+        blocks.add(REALS_TO_PAIR);
+        for (int k = 0; k < 102; k++) {
+            double re = -1 - 0.01 * k;
+            blocks.add(new Block(re, 0, 1, -1, 0, re, 0));
+        }
+        DynamicalModel m = model(blocks.toArray(Block[]::new));
+        assertEquals(0, hopf(m, 0.04, -0.04).size());
+        assertEquals(0, hopf(m, -0.04, 0.04).size());
+    }
 }

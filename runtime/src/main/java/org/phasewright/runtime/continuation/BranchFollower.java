@@ -265,13 +265,16 @@ public final class BranchFollower {
         // A pair that crosses keeps its rank among the pairs; when the count of pairs in the right half-plane goes
         // from k to m, the pairs of ranks min(k, m) .. max(k, m) - 1 crossed, each at its own Hopf point. A pair can
         // also enter or leave the right half-plane by being born from (or splitting into) two real eigenvalues
-        // there, off the axis: nothing is claimed then. That is known when the count of real eigenvalues right of
-        // the axis changed, or, with every eigenvalue listed, when the count of pairs did. (A large model lists only
-        // its rightmost eigenvalues, whose pairs come and go at the bottom of the list as the spectrum moves.)
-        boolean sameUnstableReals = a.allUnstableListed() && b.allUnstableListed()
-                && a.unstableReals() == b.unstableReals();
-        boolean samePairs = a.complete() && b.complete() && a.pairs().length == b.pairs().length;
-        if (sameUnstableReals || samePairs) {
+        // there, off the axis: nothing is claimed then. With every eigenvalue listed that shows as a change in the
+        // count of pairs or in the count of real eigenvalues right of the axis; one of them may change for another
+        // reason (a fold in the same step) as long as the other does not. A large model lists only its rightmost
+        // eigenvalues: pairs come and go at the bottom of the list as the spectrum moves, so there the unstable
+        // real eigenvalues must keep their count, and so must the pairs unless every unstable eigenvalue is listed.
+        boolean samePairs = a.pairs().length == b.pairs().length;
+        boolean sameUnstableReals = a.unstableReals() == b.unstableReals();
+        boolean claim = a.complete() && b.complete() ? samePairs || sameUnstableReals
+                : sameUnstableReals && (samePairs || (a.allUnstableListed() && b.allUnstableListed()));
+        if (claim) {
             int before = a.unstablePairs(), after = b.unstablePairs();
             for (int rank = Math.min(before, after); rank < Math.max(before, after); rank++) {
                 if (Math.signum(a.pair(rank)) * Math.signum(b.pair(rank)) < 0) {
@@ -531,7 +534,8 @@ public final class BranchFollower {
         return m;
     }
 
-    static String number(double x) {
+    /** x to six significant digits without trailing zeros, as continuation messages write parameter values. */
+    public static String number(double x) {
         return String.format(Locale.ROOT, "%.6g", x).replaceAll("\\.?0+(e|$)", "$1");
     }
 

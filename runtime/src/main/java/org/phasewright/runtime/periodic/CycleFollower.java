@@ -3,12 +3,12 @@ package org.phasewright.runtime.periodic;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import java.util.Locale;
 import java.util.function.BooleanSupplier;
 
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.EigenDecomposition;
 import org.phasewright.runtime.compile.VectorField;
+import org.phasewright.runtime.continuation.BranchFollower;
 import org.phasewright.runtime.continuation.ParameterVector;
 import org.phasewright.runtime.continuation.RegulaFalsiBracket;
 import org.phasewright.runtime.continuation.SquareSolve;
@@ -137,12 +137,12 @@ public final class CycleFollower {
                 locateFold(points, x, t, previousStep, h, ty[n + 1] < 0);
             }
             if (y[n + 1] < lo || y[n + 1] > hi) {
-                end = "reached " + parameters.name() + " = " + number(y[n + 1] > hi ? hi : lo);
+                end = "reached " + parameters.name() + " = " + BranchFollower.number(y[n + 1] > hi ? hi : lo);
                 break;
             }
             points.add(point(y, yShot, null));
             if (y[n] > settings.periodLimit() * period0) {
-                end = "period above " + number(settings.periodLimit())
+                end = "period above " + BranchFollower.number(settings.periodLimit())
                         + " times the Hopf period (close to a homoclinic orbit?)";
                 break;
             }
@@ -411,9 +411,5 @@ public final class CycleFollower {
             s += a[i] * b[i];
         }
         return s;
-    }
-
-    private static String number(double x) {
-        return String.format(Locale.ROOT, "%.6g", x).replaceAll("\\.?0+(e|$)", "$1");
     }
 }

@@ -149,6 +149,36 @@ class LargeContinuationTest {
                 summary);
     }
 
+    @Test
+    void forcedRingMeetsItsHopfPointsInTheOrderOfTheClosedForm() {
+        // The Lorenz (1996) ring at its uniform state x_i = F: f_u = F (S - S^-2) - I with (S x)_i = x_{i+1}, a
+        // circulant with eigenvalues F (w^k - w^-2k) - 1, w = exp(2πi/N) (Gray 2006). Mode pair ±k crosses the
+        // imaginary axis at F_k = 1 / (cos θ - cos 2θ), θ = 2πk/N, with frequency F_k (sin θ + sin 2θ); their
+        // least value is 8/9 at cos θ = 1/4 (from memory: van Kekem & Sterk, Physica D 2018). For N = 600 five
+        // pairs cross between F = 0.8888 and 0.8897, three of them within one continuation step: each is its own
+        // Hopf point, in order.
+        int n = 600;
+        ContinuationResult r = follow(LatticeModels.lorenz96(n, 0.5, true), "F", 0.5, 0.89);
+        assertNotNull(r.continuation(), r.message());
+        List<SpecialPoint> hopf = r.continuation().specialPoints().stream()
+                .filter(s -> s.kind() == SpecialPoint.Kind.HOPF).toList();
+        int[] modes = {126, 125, 127, 124, 128}; // increasing F_k, all F_k < 0.89
+        assertEquals(modes.length, hopf.size(), r.message());
+        for (int j = 0; j < modes.length; j++) {
+            double theta = 2 * Math.PI * modes[j] / n;
+            double fk = 1 / (Math.cos(theta) - Math.cos(2 * theta));
+            assertEquals(fk, hopf.get(j).parameter(), 1e-8, "mode " + modes[j]);
+            assertEquals(fk * (Math.sin(theta) + Math.sin(2 * theta)), hopf.get(j).frequency(), 1e-7,
+                    "mode " + modes[j]);
+        }
+        assertTrue(!r.message().contains("further Hopf points"), r.message());
+        // beyond F = 0.8905 seven pairs are unstable, more than the 12 eigenvalues listed: the message says that
+        // further Hopf points are not looked for
+        ContinuationResult further = follow(LatticeModels.lorenz96(n, 0.5, true), "F", 0.5, 0.9);
+        assertTrue(further.message().contains("every listed eigenvalue is unstable, and further Hopf points are not "
+                + "looked for"), further.message());
+    }
+
     /** x_i' = λ x_i - x_i³ + D (x_{i-1} - 2x_i + x_{i+1}) on a ring. */
     static DynamicalModel cubicRing(int cells, double lambda, double d) {
         ModelAssembler m = new ModelAssembler("cubic-ring", null, new TimeAxis("t", null));

@@ -70,12 +70,11 @@ public final class BranchFollower {
      * largest first, and {@code frequencies} their imaginary parts: a Hopf point is where the k-th largest of these
      * real parts crosses zero (an order statistic, continuous even when pairs overtake one another, unlike the real
      * part of the pair nearest the axis, which jumps where two pairs straddle it). {@code unstableReals} counts the
-     * real eigenvalues right of the axis; {@code complete} says whether the list holds every eigenvalue, and
-     * {@code allUnstableListed} whether it holds at least every one right of the axis (a large model's rightmost
-     * eigenvalues when one of them is stable).
+     * real eigenvalues right of the axis; {@code allUnstableListed} says whether the list holds every one right of
+     * the axis (all eigenvalues, or a large model's rightmost ones when one of them is stable).
      */
     private record Tests(double fold, double branch, double[] pairs, double[] frequencies, int unstableReals,
-            boolean complete, boolean allUnstableListed) {
+            boolean allUnstableListed) {
         int unstablePairs() {
             int count = 0;
             for (double re : pairs) {
@@ -199,10 +198,15 @@ public final class BranchFollower {
                     located.add(l);
                 }
             }
-            located.sort(java.util.Comparator.comparingDouble(Located::arclength)); // several in one step
+            located.sort(Comparator.comparingDouble(Located::arclength)); // several in one step
+            Located previous = null;
             for (Located l : located) {
+                if (previous != null && sameHopfPoint(previous.special(), l.special())) {
+                    continue; // a double pair (two equal pairs, as modes k and -k of a symmetric ring) crossing
+                }
                 specials.add(l.special());
                 points.add(l.point());
+                previous = l;
             }
             if (outside) {
                 double[] boundary = boundary(x, next);
@@ -256,25 +260,26 @@ public final class BranchFollower {
 
     private List<Change> changes(Tests a, Tests b) {
         List<Change> out = new ArrayList<>();
-        if (Math.signum(a.fold()) * Math.signum(b.fold()) < 0) {
+        boolean fold = Math.signum(a.fold()) * Math.signum(b.fold()) < 0;
+        boolean branchPoint = Math.signum(a.branch()) * Math.signum(b.branch()) < 0;
+        if (fold) {
             out.add(new Change(SpecialPoint.Kind.FOLD, -1));
         }
-        if (Math.signum(a.branch()) * Math.signum(b.branch()) < 0) {
+        if (branchPoint) {
             out.add(new Change(SpecialPoint.Kind.BRANCH_POINT, -1));
         }
         // A pair that crosses keeps its rank among the pairs; when the count of pairs in the right half-plane goes
         // from k to m, the pairs of ranks min(k, m) .. max(k, m) - 1 crossed, each at its own Hopf point. A pair can
         // also enter or leave the right half-plane by being born from (or splitting into) two real eigenvalues
-        // there, off the axis: nothing is claimed then. With every eigenvalue listed that shows as a change in the
-        // count of pairs or in the count of real eigenvalues right of the axis; one of them may change for another
-        // reason (a fold in the same step) as long as the other does not. A large model lists only its rightmost
-        // eigenvalues: pairs come and go at the bottom of the list as the spectrum moves, so there the unstable
-        // real eigenvalues must keep their count, and so must the pairs unless every unstable eigenvalue is listed.
-        boolean samePairs = a.pairs().length == b.pairs().length;
-        boolean sameUnstableReals = a.unstableReals() == b.unstableReals();
-        boolean claim = a.complete() && b.complete() ? samePairs || sameUnstableReals
-                : sameUnstableReals && (samePairs || (a.allUnstableListed() && b.allUnstableListed()));
-        if (claim) {
+        // there, off the axis: that changes the count of real eigenvalues right of the axis by two, and nothing is
+        // claimed. A change by one is a real eigenvalue crossing zero (a fold or branch point in the same step).
+        // A large model lists only its rightmost eigenvalues, and pairs come and go at the bottom of the list as
+        // the spectrum moves: unless both lists hold every unstable eigenvalue, the count of pairs must also agree.
+        int realsChange = Math.abs(a.unstableReals() - b.unstableReals());
+        boolean realsAccounted = realsChange == 0 || (realsChange == 1 && (fold || branchPoint));
+        boolean listsComparable = a.pairs().length == b.pairs().length
+                || (a.allUnstableListed() && b.allUnstableListed());
+        if (realsAccounted && listsComparable) {
             int before = a.unstablePairs(), after = b.unstablePairs();
             for (int rank = Math.min(before, after); rank < Math.max(before, after); rank++) {
                 if (Math.signum(a.pair(rank)) * Math.signum(b.pair(rank)) < 0) {
@@ -326,7 +331,7 @@ public final class BranchFollower {
             // eigenvalues only when locating a Hopf point (folds and branch points need none)
             Tests ts = tests(y, ty, kind == SpecialPoint.Kind.HOPF);
             double fs = value(kind, ts, rank);
-            if (Double.isNaN(fs)) { // the pair left the list (or became two real eigenvalues): no Hopf point here
+            if (Double.isNaN(fs)) { // no pair of that rank here (it left the list, or is not born yet): no Hopf point
                 return null;
             }
             best = y;
@@ -344,6 +349,11 @@ public final class BranchFollower {
         if (best == null || best[n] < lo || best[n] > hi) {
             return null;
         }
+        // the k-th largest real part jumps where pairs are born or die; a sign change across such a jump is no
+        // crossing of the axis, and regula falsi ends on the jump with the test far from zero
+        if (kind == SpecialPoint.Kind.HOPF && !(Math.abs(value(kind, bestTests, rank)) <= 1e-5 * lastScale)) {
+            return null;
+        }
         double[] u = Arrays.copyOf(best, n);
         double frequency = Double.NaN, l1 = Double.NaN;
         if (kind == SpecialPoint.Kind.HOPF) {
@@ -356,6 +366,18 @@ public final class BranchFollower {
             switchBranches(best, bestTangent, branch);
         }
         return located;
+    }
+
+    /** Two Hopf points of one step at the same point with the same frequency. */
+    private boolean sameHopfPoint(SpecialPoint a, SpecialPoint b) {
+        if (a.kind() != SpecialPoint.Kind.HOPF || b.kind() != SpecialPoint.Kind.HOPF
+                || !(Math.abs(a.frequency() - b.frequency()) <= 1e-6 * Math.abs(a.frequency()))) {
+            return false;
+        }
+        double[] x = Arrays.copyOf(a.state(), n + 1), y = Arrays.copyOf(b.state(), n + 1);
+        x[n] = a.parameter();
+        y[n] = b.parameter();
+        return same(x, y);
     }
 
     /** Queues the other branch through a branch point, in both directions. */
@@ -428,7 +450,7 @@ public final class BranchFollower {
     /** Without {@code eigenvalues} the pairs are left empty (the fold and branch-point tests need none). */
     private Tests tests(double[] x, double[] t, boolean eigenvalues) {
         if (!eigenvalues) {
-            return new Tests(t[n], corrector.branchTest(x, t), new double[0], new double[0], 0, false, false);
+            return new Tests(t[n], corrector.branchTest(x, t), new double[0], new double[0], 0, false);
         }
         LinearStability s = stability(x);
         double[] re = s.real(), im = s.imaginary();
@@ -440,7 +462,7 @@ public final class BranchFollower {
         for (int k = 0; k < re.length; k++) {
             if (im[k] > tolerance) {
                 pairs.add(new double[] {re[k], im[k]});
-            } else if (Math.abs(im[k]) <= tolerance && re[k] > 0) {
+            } else if (Math.abs(im[k]) <= tolerance && re[k] > tolerance) { // zero as Classification has it
                 unstableReals++;
             }
             lowest = Math.min(lowest, re[k]);
@@ -451,9 +473,9 @@ public final class BranchFollower {
             real[k] = pairs.get(k)[0];
             frequency[k] = pairs.get(k)[1];
         }
-        boolean complete = re.length == n;
-        return new Tests(t[n], corrector.branchTest(x, t), real, frequency, unstableReals, complete,
-                complete || lowest < 0);
+        boolean finite = !Double.isNaN(lowest);
+        return new Tests(t[n], corrector.branchTest(x, t), real, frequency, unstableReals,
+                finite && (re.length == n || lowest < -tolerance));
     }
 
     /**

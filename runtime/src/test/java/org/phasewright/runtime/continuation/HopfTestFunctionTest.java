@@ -72,6 +72,33 @@ class HopfTestFunctionTest {
         }
     }
 
+    /** The positions of the Hopf points among the points of the first branch. */
+    static List<Integer> hopfPositions(ContinuationOutcome o) {
+        List<ContinuationPoint> points = o.branches().get(0).points();
+        List<Integer> at = new ArrayList<>();
+        for (int i = 0; i < points.size(); i++) {
+            if (points.get(i).special() == SpecialPoint.Kind.HOPF) {
+                at.add(i);
+            }
+        }
+        return at;
+    }
+
+    /** Complex pairs among a point's listed eigenvalues. */
+    static long pairsListed(ContinuationPoint p) {
+        return java.util.Arrays.stream(p.eigenvaluesImag()).filter(im -> im > 1e-9).count();
+    }
+
+    /** {@code first}, then {@code count} stable foci -1 - 0.01k ± (1 + dk) i, k = 0, 1, ... */
+    static Block[] withStableFoci(int count, double d, Block... first) {
+        List<Block> blocks = new ArrayList<>(List.of(first));
+        for (int k = 0; k < count; k++) {
+            double re = -1 - 0.01 * k, im = 1 + d * k;
+            blocks.add(new Block(re, 0, 1, -im * im, 0, re, 0));
+        }
+        return blocks.toArray(Block[]::new);
+    }
+
     static final Block STABLE_FOCUS = new Block(-1, 0, 1, -1, 0, -1, 0); // -1 ± i
     static final Block UNSTABLE_FOCUS = new Block(0.3, 0, 1, -4, 0, 0.3, 0); // 0.3 ± 2i
     /** 0.45 ± sqrt(λ): two real eigenvalues right of the axis for λ > 0, a pair right of it for λ < 0. */
@@ -114,6 +141,8 @@ class HopfTestFunctionTest {
         assertEquals(2, down.size());
         assertPointsInOrder(follow(m, -0.5, 0.5), -0.5, 0.5);
         assertPointsInOrder(follow(m, 0.5, -0.5), 0.5, -0.5);
+        List<Integer> at = hopfPositions(follow(m, -0.5, 0.5)); // found in one step: neighbours on the branch
+        assertEquals(at.get(0) + 1, at.get(1));
         assertEquals(0.0001, down.get(0).parameter(), 1e-9);
         assertEquals(3.0, down.get(0).frequency(), 1e-9);
         assertEquals(0.0, down.get(1).parameter(), 1e-9);
@@ -124,15 +153,14 @@ class HopfTestFunctionTest {
     void twoPairsCrossingWithinOneStepAreBothLocatedInALargeModel() {
         // the same two crossing pairs among 101 stable foci -1 - 0.01k ± (1 + 0.05k) i: 206 states, so the test
         // reads the rightmost eigenvalues of the sparse Jacobian instead of the full spectrum
-        List<Block> blocks = new ArrayList<>();
-        blocks.add(new Block(0, 1, 1, -1, 0, 0, 1));
-        blocks.add(new Block(-0.0001, 1, 1, -9, 0, -0.0001, 1));
-        for (int k = 0; k < 101; k++) {
-            double re = -1 - 0.01 * k, im = 1 + 0.05 * k;
-            blocks.add(new Block(re, 0, 1, -im * im, 0, re, 0));
-        }
-        List<SpecialPoint> points = hopf(model(blocks.toArray(Block[]::new)), -0.5, 0.5);
+        DynamicalModel m = model(withStableFoci(101, 0.05, new Block(0, 1, 1, -1, 0, 0, 1),
+                new Block(-0.0001, 1, 1, -9, 0, -0.0001, 1)));
+        ContinuationOutcome o = follow(m, -0.5, 0.5);
+        List<SpecialPoint> points = o.specialPoints().stream().filter(s -> s.kind() == SpecialPoint.Kind.HOPF)
+                .toList();
         assertEquals(2, points.size());
+        List<Integer> at = hopfPositions(o); // found in one step: neighbours on the branch
+        assertEquals(at.get(0) + 1, at.get(1));
         assertEquals(0.0, points.get(0).parameter(), 1e-8);
         assertEquals(1.0, points.get(0).frequency(), 1e-8);
         assertEquals(0.0001, points.get(1).parameter(), 1e-8);
@@ -145,30 +173,77 @@ class HopfTestFunctionTest {
         // through the bottom of the list of rightmost eigenvalues, so the two ends of that step list different
         // numbers of pairs (a stable pair enters the list as the reals leave it). Stable foci -1 - 0.01k ± i; the
         // Hopf point is the one of the crossing pair alone (block eigenvalues in closed form, as above).
-        List<Block> blocks = new ArrayList<>();
-        blocks.add(new Block(0, 1, 1, -1, 0, 0, 1));
-        blocks.add(new Block(-1.045, -20, 0, 0, 0, -1.046, -20));
-        for (int k = 0; k < 100; k++) {
-            double re = -1 - 0.01 * k;
-            blocks.add(new Block(re, 0, 1, -1, 0, re, 0));
-        }
-        List<SpecialPoint> points = hopf(model(blocks.toArray(Block[]::new)), -0.5, 0.5);
+        DynamicalModel m = model(withStableFoci(100, 0, new Block(0, 1, 1, -1, 0, 0, 1),
+                new Block(-1.045, -20, 0, 0, 0, -1.046, -20)));
+        ContinuationOutcome o = follow(m, -0.5, 0.5);
+        List<SpecialPoint> points = o.specialPoints().stream().filter(s -> s.kind() == SpecialPoint.Kind.HOPF)
+                .toList();
         assertEquals(1, points.size());
         assertEquals(0.0, points.get(0).parameter(), 1e-8);
         assertEquals(1.0, points.get(0).frequency(), 1e-8);
+        // the setup: the points either side of the Hopf point list different numbers of pairs
+        List<ContinuationPoint> branch = o.branches().get(0).points();
+        int at = hopfPositions(o).get(0);
+        assertTrue(pairsListed(branch.get(at - 1)) != pairsListed(branch.get(at + 1)));
     }
 
     @Test
     void aPairBornOffTheAxisIsNoHopfPointInALargeModelEither() {
         // REALS_TO_PAIR among 102 stable foci: 206 states, only the rightmost eigenvalues listed
-        List<Block> blocks = new ArrayList<>();
-        blocks.add(REALS_TO_PAIR);
-        for (int k = 0; k < 102; k++) {
-            double re = -1 - 0.01 * k;
-            blocks.add(new Block(re, 0, 1, -1, 0, re, 0));
-        }
-        DynamicalModel m = model(blocks.toArray(Block[]::new));
+        DynamicalModel m = model(withStableFoci(102, 0, REALS_TO_PAIR));
         assertEquals(0, hopf(m, 0.04, -0.04).size());
         assertEquals(0, hopf(m, -0.04, 0.04).size());
+    }
+
+    @Test
+    void aPairBornWhileAnotherDiesInOneStepIsNoHopfPoint() {
+        // going down from λ = 0.04: an unstable pair 0.45 ± i sqrt(-λ) is born from two reals at λ = 0, and the
+        // stable pair -0.5 ± i sqrt(λ + 1e-5) splits into two reals at λ = -1e-5, in the same step: the count of
+        // pairs is the same at both ends, but the count of unstable real eigenvalues falls by two
+        Block splitting = new Block(-0.5, 0, 1, -1e-5, -1, -0.5, 0);
+        assertEquals(0, hopf(model(REALS_TO_PAIR, splitting, STABLE_FOCUS), 0.04, -0.04).size());
+    }
+
+    @Test
+    void aPairBornWhileARealEigenvalueCrossesZeroIsNoHopfPoint() {
+        // going down from λ = 0.04: the unstable pair is born from two reals at λ = 0 while the real eigenvalue
+        // -1e-5 - λ turns positive at λ = -1e-5 (a branch point of the rest state), in one step. The count of
+        // unstable reals changes by one, as at a lone branch point, and the rank of the first pair changes sign;
+        // but its test function jumps (at the birth) instead of passing through zero
+        Block turning = new Block(-1e-5, -1, 0, 0, 0, -1, 0);
+        List<SpecialPoint> special = follow(model(REALS_TO_PAIR, turning, STABLE_FOCUS), 0.04, -0.04).specialPoints();
+        assertEquals(0, special.stream().filter(s -> s.kind() == SpecialPoint.Kind.HOPF).count(), special.toString());
+        assertTrue(special.stream().anyMatch(s -> s.kind() == SpecialPoint.Kind.BRANCH_POINT
+                && Math.abs(s.parameter() + 1e-5) < 1e-9), special.toString());
+    }
+
+    @Test
+    void aDoublePairCrossingIsOneHopfPoint() {
+        // two equal pairs λ ± i (as modes k and -k of a symmetric ring have): one Hopf point, dense and sparse
+        Block crossing = new Block(0, 1, 1, -1, 0, 0, 1);
+        List<SpecialPoint> dense = hopf(model(crossing, crossing, STABLE_FOCUS), -0.5, 0.5);
+        assertEquals(1, dense.size());
+        assertEquals(0.0, dense.get(0).parameter(), 1e-9);
+        List<SpecialPoint> sparse = hopf(model(withStableFoci(101, 0.05, crossing, crossing)), -0.5, 0.5);
+        assertEquals(1, sparse.size());
+        assertEquals(0.0, sparse.get(0).parameter(), 1e-8);
+    }
+
+    @Test
+    void aHopfPointAndABranchPointInOneStepAreBothFoundInALargeModel() {
+        // re = λ with frequency 1, and a real eigenvalue λ - 5e-5 (the other of its block -1): the real one makes
+        // the rest state singular at λ = 5e-5, a branch point, in the same step as the Hopf point at λ = 0. The
+        // other branch there is a straight line of equilibria, stopped early by a low blow-up bound.
+        DynamicalModel m = model(withStableFoci(101, 0.05, new Block(0, 1, 1, -1, 0, 0, 1),
+                new Block(-5e-5, 1, 0, 0, 0, -1, 0)));
+        CompiledModel cm = ModelCompiler.compile(m);
+        List<SpecialPoint> special = new BranchFollower(cm.field(), new ParameterVector(m, cm.parameters(), 0), 1,
+                -0.5, 0.5, ContinuationSettings.DEFAULT.withBlowUpBound(1), Long.MAX_VALUE, () -> false)
+                .follow(List.of(new double[cm.field().dimension()])).specialPoints();
+        List<SpecialPoint> hopf = special.stream().filter(s -> s.kind() == SpecialPoint.Kind.HOPF).toList();
+        assertEquals(1, hopf.size());
+        assertEquals(0.0, hopf.get(0).parameter(), 1e-8);
+        assertTrue(special.stream().anyMatch(s -> s.kind() == SpecialPoint.Kind.BRANCH_POINT
+                && Math.abs(s.parameter() - 5e-5) < 1e-8), special.toString());
     }
 }

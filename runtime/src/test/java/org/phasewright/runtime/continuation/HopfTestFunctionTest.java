@@ -59,7 +59,11 @@ class HopfTestFunctionTest {
     }
 
     static List<SpecialPoint> hopf(DynamicalModel m, double from, double to) {
-        return follow(m, from, to).specialPoints().stream().filter(s -> s.kind() == SpecialPoint.Kind.HOPF).toList();
+        return hopf(follow(m, from, to));
+    }
+
+    static List<SpecialPoint> hopf(ContinuationOutcome o) {
+        return o.specialPoints().stream().filter(s -> s.kind() == SpecialPoint.Kind.HOPF).toList();
     }
 
     /** The branch u = 0 of a linear model runs straight from {@code from} to {@code to}: λ along it is monotone. */
@@ -70,6 +74,11 @@ class HopfTestFunctionTest {
             double step = points.get(i).parameter() - points.get(i - 1).parameter();
             assertTrue(step * Math.signum(to - from) >= 0, "point " + i + " goes back");
         }
+    }
+
+    static void assertHopfPoint(double parameter, double frequency, SpecialPoint s, double tolerance) {
+        assertEquals(parameter, s.parameter(), tolerance);
+        assertEquals(frequency, s.frequency(), tolerance);
     }
 
     /** The positions of the Hopf points among the points of the first branch. */
@@ -119,10 +128,8 @@ class HopfTestFunctionTest {
         Block first = new Block(0, 1, 1, -1, 0, 0, 1), second = new Block(-0.2, 1, 1, -9, 0, -0.2, 1);
         List<SpecialPoint> points = hopf(model(first, second, STABLE_FOCUS), -0.5, 0.5);
         assertEquals(2, points.size());
-        assertEquals(0.0, points.get(0).parameter(), 1e-9);
-        assertEquals(1.0, points.get(0).frequency(), 1e-9);
-        assertEquals(0.2, points.get(1).parameter(), 1e-9);
-        assertEquals(3.0, points.get(1).frequency(), 1e-9);
+        assertHopfPoint(0.0, 1.0, points.get(0), 1e-9);
+        assertHopfPoint(0.2, 3.0, points.get(1), 1e-9);
     }
 
     @Test
@@ -131,22 +138,24 @@ class HopfTestFunctionTest {
         // (the steps are some hundredths of the interval), each at its own Hopf point, found in the order met
         Block first = new Block(0, 1, 1, -1, 0, 0, 1), second = new Block(-0.0001, 1, 1, -9, 0, -0.0001, 1);
         DynamicalModel m = model(first, second, STABLE_FOCUS);
-        List<SpecialPoint> up = hopf(m, -0.5, 0.5);
-        assertEquals(2, up.size());
-        assertEquals(0.0, up.get(0).parameter(), 1e-9);
-        assertEquals(1.0, up.get(0).frequency(), 1e-9);
-        assertEquals(0.0001, up.get(1).parameter(), 1e-9);
-        assertEquals(3.0, up.get(1).frequency(), 1e-9);
-        List<SpecialPoint> down = hopf(m, 0.5, -0.5);
-        assertEquals(2, down.size());
-        assertPointsInOrder(follow(m, -0.5, 0.5), -0.5, 0.5);
-        assertPointsInOrder(follow(m, 0.5, -0.5), 0.5, -0.5);
-        List<Integer> at = hopfPositions(follow(m, -0.5, 0.5)); // found in one step: neighbours on the branch
+        ContinuationOutcome up = follow(m, -0.5, 0.5);
+        assertTwoHopfPointsInOneStep(up, 1e-9);
+        assertPointsInOrder(up, -0.5, 0.5);
+        ContinuationOutcome down = follow(m, 0.5, -0.5);
+        assertPointsInOrder(down, 0.5, -0.5);
+        assertEquals(2, hopf(down).size());
+        assertHopfPoint(0.0001, 3.0, hopf(down).get(0), 1e-9);
+        assertHopfPoint(0.0, 1.0, hopf(down).get(1), 1e-9);
+    }
+
+    /** Hopf points at λ = 0 (frequency 1) and 1e-4 (frequency 3), neighbours on the branch: found in one step. */
+    static void assertTwoHopfPointsInOneStep(ContinuationOutcome o, double tolerance) {
+        List<SpecialPoint> points = hopf(o);
+        assertEquals(2, points.size());
+        assertHopfPoint(0.0, 1.0, points.get(0), tolerance);
+        assertHopfPoint(0.0001, 3.0, points.get(1), tolerance);
+        List<Integer> at = hopfPositions(o);
         assertEquals(at.get(0) + 1, at.get(1));
-        assertEquals(0.0001, down.get(0).parameter(), 1e-9);
-        assertEquals(3.0, down.get(0).frequency(), 1e-9);
-        assertEquals(0.0, down.get(1).parameter(), 1e-9);
-        assertEquals(1.0, down.get(1).frequency(), 1e-9);
     }
 
     @Test
@@ -155,16 +164,7 @@ class HopfTestFunctionTest {
         // reads the rightmost eigenvalues of the sparse Jacobian instead of the full spectrum
         DynamicalModel m = model(withStableFoci(101, 0.05, new Block(0, 1, 1, -1, 0, 0, 1),
                 new Block(-0.0001, 1, 1, -9, 0, -0.0001, 1)));
-        ContinuationOutcome o = follow(m, -0.5, 0.5);
-        List<SpecialPoint> points = o.specialPoints().stream().filter(s -> s.kind() == SpecialPoint.Kind.HOPF)
-                .toList();
-        assertEquals(2, points.size());
-        List<Integer> at = hopfPositions(o); // found in one step: neighbours on the branch
-        assertEquals(at.get(0) + 1, at.get(1));
-        assertEquals(0.0, points.get(0).parameter(), 1e-8);
-        assertEquals(1.0, points.get(0).frequency(), 1e-8);
-        assertEquals(0.0001, points.get(1).parameter(), 1e-8);
-        assertEquals(3.0, points.get(1).frequency(), 1e-8);
+        assertTwoHopfPointsInOneStep(follow(m, -0.5, 0.5), 1e-8);
     }
 
     @Test
@@ -176,11 +176,9 @@ class HopfTestFunctionTest {
         DynamicalModel m = model(withStableFoci(100, 0, new Block(0, 1, 1, -1, 0, 0, 1),
                 new Block(-1.045, -20, 0, 0, 0, -1.046, -20)));
         ContinuationOutcome o = follow(m, -0.5, 0.5);
-        List<SpecialPoint> points = o.specialPoints().stream().filter(s -> s.kind() == SpecialPoint.Kind.HOPF)
-                .toList();
+        List<SpecialPoint> points = hopf(o);
         assertEquals(1, points.size());
-        assertEquals(0.0, points.get(0).parameter(), 1e-8);
-        assertEquals(1.0, points.get(0).frequency(), 1e-8);
+        assertHopfPoint(0.0, 1.0, points.get(0), 1e-8);
         // the setup: the points either side of the Hopf point list different numbers of pairs
         List<ContinuationPoint> branch = o.branches().get(0).points();
         int at = hopfPositions(o).get(0);

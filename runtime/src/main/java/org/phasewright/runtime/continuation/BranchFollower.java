@@ -59,6 +59,8 @@ public final class BranchFollower {
     private final List<double[]> branchPointsSeen = new ArrayList<>();
     private final Deque<Seed> seeds = new ArrayDeque<>();
     private long corrections;
+    /** The parameter at the first point whose listed eigenvalues were all unstable (NaN: none). */
+    private double hopfSightLostAt = Double.NaN;
     private ContinuationOutcome.Ending ending = ContinuationOutcome.Ending.COMPLETED;
 
     /** A place to start a branch: a point on it, the direction to go, and where it came from. */
@@ -133,7 +135,7 @@ public final class BranchFollower {
             }
             trace(seed);
         }
-        return new ContinuationOutcome(name(), from, to, ending, branches, specials, corrections);
+        return new ContinuationOutcome(name(), from, to, ending, branches, specials, corrections, hopfSightLostAt);
     }
 
     private String name() {
@@ -474,6 +476,9 @@ public final class BranchFollower {
             frequency[k] = pairs.get(k)[1];
         }
         boolean finite = !Double.isNaN(lowest);
+        if (finite && re.length > 0 && re.length < n && !(lowest < -tolerance) && Double.isNaN(hopfSightLostAt)) {
+            hopfSightLostAt = x[n]; // pairs crossing further down the spectrum are out of the Hopf test's sight
+        }
         return new Tests(t[n], corrector.branchTest(x, t), real, frequency, unstableReals,
                 finite && (re.length == n || lowest < -tolerance));
     }
@@ -498,7 +503,7 @@ public final class BranchFollower {
         } else {
             system.sparseStateJacobian(x, sparseJac);
             lastStability = LinearStability.ofSparse(sparseJac, settings.eigenTolerance(), this::stopped,
-                    eigenMemory);
+                    eigenMemory, true);
             scale = sparseJac.weightedRowNorm(null);
         }
         lastScale = scale;
@@ -512,7 +517,15 @@ public final class BranchFollower {
 
     private ContinuationPoint point(double[] x, SpecialPoint.Kind special) {
         LinearStability s = stability(x);
-        return new ContinuationPoint(x[n], Arrays.copyOf(x, n), s.real(), s.imaginary(),
+        double[] re = s.real(), im = s.imaginary();
+        int keep = re.length;
+        if (jac == null && keep > RightmostEigenvalues.WANTED) { // a ring's whole spectrum: the rightmost, as listed
+            keep = RightmostEigenvalues.WANTED;
+            if (im[keep - 1] > 0 && im[keep] < 0) { // not half a pair
+                keep++;
+            }
+        }
+        return new ContinuationPoint(x[n], Arrays.copyOf(x, n), Arrays.copyOf(re, keep), Arrays.copyOf(im, keep),
                 s.classification(), special);
     }
 

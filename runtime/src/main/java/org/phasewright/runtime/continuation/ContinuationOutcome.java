@@ -5,10 +5,13 @@ import java.util.List;
 /**
  * Every branch followed and every special point located on them, and whether the run did all it meant to.
  *
- * @param corrections Newton corrections over all branches (a measure of work)
+ * @param corrections     Newton corrections over all branches (a measure of work)
+ * @param hopfSightLostAt the parameter value at the first point where a large model's list of rightmost
+ *                        eigenvalues held only unstable ones, so pairs crossing the imaginary axis further down were
+ *                        out of the Hopf test's sight; NaN when that never happened
  */
 public record ContinuationOutcome(String parameterName, double from, double to, Ending ending, List<Branch> branches,
-        List<SpecialPoint> specialPoints, long corrections) {
+        List<SpecialPoint> specialPoints, long corrections, double hopfSightLostAt) {
 
     /** COMPLETED: every branch ran to an end of its own; the others stopped early and keep what was found. */
     public enum Ending { COMPLETED, WORK_LIMIT, TIME_LIMIT, CANCELLED }

@@ -64,12 +64,16 @@ public final class LinearStability {
      * pieces of work; when it fires the equilibrium is left "not classified".
      */
     public static LinearStability ofSparse(SparseMatrix j, double relativeTolerance, BooleanSupplier stop) {
-        return ofSparse(j, relativeTolerance, stop, null);
+        return ofSparse(j, relativeTolerance, stop, null, false);
     }
 
-    /** The same, with a {@link RightmostEigenvalues.Memory} kept along a sequence of similar Jacobians. */
+    /**
+     * The same, with a {@link RightmostEigenvalues.Memory} kept along a sequence of similar Jacobians; with
+     * {@code wholeCirculantSpectrum} a block-circulant Jacobian keeps all its eigenvalues (a continuation's Hopf test
+     * then sees every pair, as in a dense model).
+     */
     public static LinearStability ofSparse(SparseMatrix j, double relativeTolerance, BooleanSupplier stop,
-            RightmostEigenvalues.Memory memory) {
+            RightmostEigenvalues.Memory memory, boolean wholeCirculantSpectrum) {
         int n = j.dimension();
         if (!j.allFinite()) {
             double[] nan = {Double.NaN};
@@ -80,6 +84,9 @@ public final class LinearStability {
         double[][] all = BlockCirculantSpectrum.of(j, 1e-3 * tolerance, stop);
         if (all != null) {
             LinearStability full = sorted(all[0], all[1], tolerance);
+            if (wholeCirculantSpectrum) {
+                return full;
+            }
             int keep = Math.min(n, RightmostEigenvalues.WANTED);
             return new LinearStability(Arrays.copyOf(full.re, keep), Arrays.copyOf(full.im, keep),
                     full.classification);

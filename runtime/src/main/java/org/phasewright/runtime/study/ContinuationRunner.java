@@ -6,9 +6,7 @@ import java.util.Optional;
 
 import org.phasewright.runtime.compile.CompiledModel;
 import org.phasewright.runtime.compile.SparseJacobian;
-import org.phasewright.runtime.continuation.Branch;
 import org.phasewright.runtime.continuation.BranchFollower;
-import org.phasewright.runtime.continuation.ContinuationPoint;
 import org.phasewright.runtime.continuation.ContinuationOutcome;
 import org.phasewright.runtime.continuation.ContinuationSettings;
 import org.phasewright.runtime.continuation.ParameterVector;
@@ -107,9 +105,8 @@ final class ContinuationRunner {
         if (large) {
             message += "; a model of " + model.dimension() + " states is followed with its sparse Jacobian: "
                     + "stability from the rightmost eigenvalues, no periodic orbits from Hopf points";
-            ContinuationPoint beyond = firstWithOnlyUnstableListed(outcome, model.dimension());
-            if (beyond != null) {
-                message += "; from " + parameters.name() + " = " + BranchFollower.number(beyond.parameter())
+            if (!Double.isNaN(outcome.hopfSightLostAt())) {
+                message += "; from " + parameters.name() + " = " + BranchFollower.number(outcome.hopfSightLostAt())
                         + " every listed eigenvalue is unstable, and further Hopf points are not looked for";
             }
         }
@@ -119,23 +116,6 @@ final class ContinuationRunner {
         return new ContinuationResult(outcome, cycles, complete ? Status.COMPLETED : Status.INCOMPLETE,
                 complete ? "COMPLETED" : outcome.ending() != ContinuationOutcome.Ending.COMPLETED
                         ? outcome.ending().name() : search.ending().name(), message);
-    }
-
-    /**
-     * The first point, branch by branch, whose list of rightmost eigenvalues lies wholly right of the imaginary
-     * axis: pairs crossing the axis further down the spectrum are then out of the Hopf test's sight. Null if none.
-     */
-    static ContinuationPoint firstWithOnlyUnstableListed(ContinuationOutcome outcome, int dimension) {
-        for (Branch b : outcome.branches()) {
-            for (ContinuationPoint p : b.points()) {
-                double[] re = p.eigenvaluesReal();
-                if (re.length > 0 && re.length < dimension
-                        && java.util.Arrays.stream(re).allMatch(r -> r > 0)) {
-                    return p;
-                }
-            }
-        }
-        return null;
     }
 
     /** The periodic orbits born at each Hopf point (at most {@link #MAX_CYCLE_FAMILIES}), within the budget. */

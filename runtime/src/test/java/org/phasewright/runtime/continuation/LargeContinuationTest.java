@@ -8,6 +8,7 @@ import static org.phasewright.runtime.TestModels.c;
 import static org.phasewright.runtime.TestModels.mul;
 import static org.phasewright.runtime.TestModels.sub;
 
+import java.util.ArrayList;
 import java.util.List;
 
 import org.junit.jupiter.api.Test;
@@ -154,29 +155,56 @@ class LargeContinuationTest {
         // The Lorenz (1996) ring at its uniform state x_i = F: f_u = F (S - S^-2) - I with (S x)_i = x_{i+1}, a
         // circulant with eigenvalues F (w^k - w^-2k) - 1, w = exp(2πi/N) (Gray 2006). Mode pair ±k crosses the
         // imaginary axis at F_k = 1 / (cos θ - cos 2θ), θ = 2πk/N, with frequency F_k (sin θ + sin 2θ); their
-        // least value is 8/9 at cos θ = 1/4 (from memory: van Kekem & Sterk, Physica D 2018). For N = 600 five
-        // pairs cross between F = 0.8888 and 0.8897, three of them within one continuation step: each is its own
-        // Hopf point, in order.
+        // least value is 8/9 at cos θ = 1/4 (from memory: van Kekem & Sterk, Physica D 2018). For N = 600, 17 pairs
+        // cross between F = 0.8888 and 0.9, several within one continuation step: each is its own Hopf point, in
+        // order, also after more than the 12 listed eigenvalues have become unstable (the ring's whole spectrum is
+        // known at a uniform state).
         int n = 600;
-        ContinuationResult r = follow(LatticeModels.lorenz96(n, 0.5, true), "F", 0.5, 0.89);
+        ContinuationResult r = follow(LatticeModels.lorenz96(n, 0.5, true), "F", 0.5, 0.9);
         assertNotNull(r.continuation(), r.message());
         List<SpecialPoint> hopf = r.continuation().specialPoints().stream()
                 .filter(s -> s.kind() == SpecialPoint.Kind.HOPF).toList();
-        int[] modes = {126, 125, 127, 124, 128}; // increasing F_k, all F_k < 0.89
-        assertEquals(modes.length, hopf.size(), r.message());
-        for (int j = 0; j < modes.length; j++) {
-            double theta = 2 * Math.PI * modes[j] / n;
-            double fk = 1 / (Math.cos(theta) - Math.cos(2 * theta));
-            assertEquals(fk, hopf.get(j).parameter(), 1e-8, "mode " + modes[j]);
-            assertEquals(fk * (Math.sin(theta) + Math.sin(2 * theta)), hopf.get(j).frequency(), 1e-7,
-                    "mode " + modes[j]);
+        List<double[]> expected = new ArrayList<>(); // {F_k, frequency}, increasing F_k < 0.9
+        for (int k = 1; k < n / 2; k++) {
+            double theta = 2 * Math.PI * k / n, fk = 1 / (Math.cos(theta) - Math.cos(2 * theta));
+            if (fk > 0 && fk < 0.9) {
+                expected.add(new double[] {fk, fk * (Math.sin(theta) + Math.sin(2 * theta))});
+            }
+        }
+        expected.sort(java.util.Comparator.comparingDouble(e -> e[0]));
+        assertEquals(17, expected.size());
+        assertEquals(expected.size(), hopf.size(), r.message());
+        for (int j = 0; j < expected.size(); j++) {
+            assertEquals(expected.get(j)[0], hopf.get(j).parameter(), 1e-8, "Hopf point " + j);
+            assertEquals(expected.get(j)[1], hopf.get(j).frequency(), 1e-7, "Hopf point " + j);
         }
         assertTrue(!r.message().contains("further Hopf points"), r.message());
-        // beyond F = 0.8905 seven pairs are unstable, more than the 12 eigenvalues listed: the message says that
-        // further Hopf points are not looked for
-        ContinuationResult further = follow(LatticeModels.lorenz96(n, 0.5, true), "F", 0.5, 0.9);
-        assertTrue(further.message().contains("every listed eigenvalue is unstable, and further Hopf points are not "
-                + "looked for"), further.message());
+    }
+
+    @Test
+    void theMessageSaysWhereTheHopfTestLosesSightOfCrossings() {
+        // eight pairs λ - 0.01j ± (1 + 0.1j) i, j = 0..7, among 100 stable foci (block eigenvalues in closed form,
+        // as in HopfTestFunctionTest): the 12 rightmost eigenvalues hold the first six pairs, all unstable from
+        // λ = 0.05 on, so the crossings at 0.06 and 0.07 are out of sight, and the message says so
+        List<HopfTestFunctionTest.Block> crossing = new ArrayList<>();
+        for (int j = 0; j < 8; j++) {
+            double im = 1 + 0.1 * j;
+            crossing.add(new HopfTestFunctionTest.Block(-0.01 * j, 1, 1, -im * im, 0, -0.01 * j, 1));
+        }
+        DynamicalModel m = HopfTestFunctionTest.model(HopfTestFunctionTest.withStableFoci(100, 0.05,
+                crossing.toArray(HopfTestFunctionTest.Block[]::new)));
+        ContinuationResult r = follow(m, "lambda", -0.1, 0.2);
+        List<SpecialPoint> hopf = r.continuation().specialPoints().stream()
+                .filter(s -> s.kind() == SpecialPoint.Kind.HOPF).toList();
+        assertEquals(6, hopf.size(), r.message());
+        for (int j = 0; j < 6; j++) {
+            assertEquals(0.01 * j, hopf.get(j).parameter(), 1e-8);
+            assertEquals(1 + 0.1 * j, hopf.get(j).frequency(), 1e-8);
+        }
+        double lost = r.continuation().hopfSightLostAt();
+        assertTrue(lost >= 0.05 - 1e-8 && lost < 0.06, "lost sight at " + lost);
+        assertTrue(r.message().contains("every listed eigenvalue is unstable, and further Hopf points are not "
+                + "looked for"), r.message());
     }
 
     /** x_i' = λ x_i - x_i³ + D (x_{i-1} - 2x_i + x_{i+1}) on a ring. */

@@ -199,6 +199,86 @@ final class AdaptiveStepDriver {
         return (t + slack * h - tEnd) * direction >= 0;
     }
 
+    /** One embedded explicit Runge–Kutta pair as {@link #run} drives it: its stages, error norm and state. */
+    interface EmbeddedPair {
+        /** The state at the current point (a different array after each accepted step). */
+        double[] state();
+
+        /**
+         * Attempts the step of size h from (t, {@link #state()}) to tNew, keeping the new point aside, and counts
+         * its rate evaluations. Returns the error norm (the step is accepted when it is at most 1), NaN or infinite
+         * when the new point or its error is not finite.
+         */
+        double attempt(double t, double h, double tNew);
+
+        /** Makes the attempt the current point: stiffness test, continuous extension, first same as last. */
+        void accept(double t, double h, double tNew);
+
+        /** |state|_inf of the point just accepted when the attempt measured it, else NaN. */
+        double largest();
+    }
+
+    /** What an {@link EmbeddedPair} needs of its integration: the driver (counters, stiffness test), tolerances. */
+    abstract static class PairAttempts implements EmbeddedPair {
+        final AdaptiveStepDriver b;
+        final double[] rtol, atol;
+        /** Whether an observer wants the continuous extension of each accepted step. */
+        final boolean denseOutput;
+
+        PairAttempts(AdaptiveStepDriver b, double[] rtol, double[] atol, boolean denseOutput) {
+            this.b = b;
+            this.rtol = rtol;
+            this.atol = atol;
+            this.denseOutput = denseOutput;
+        }
+    }
+
+    double blowUpBound() {
+        return s.blowUpBound();
+    }
+
+    /**
+     * The adaptive loop of an explicit pair from t with first step h to tEnd, or to the first other ending: the
+     * budgets, the step that lands on tEnd, rejections (a step that is not finite shrinks tenfold), the controller,
+     * the observer and the step-size limits.
+     */
+    IntegrationOutcome run(EmbeddedPair pair, StepSizeControl control, double t, double h, double tEnd) {
+        while (true) {
+            IntegrationOutcome budget = beforeAttempt(t, pair.state(), h);
+            if (budget != null) {
+                return budget;
+            }
+            boolean last = false;
+            if (reachesEnd(t, h, tEnd, 1.01)) {
+                h = tEnd - t;
+                last = true;
+            }
+            double tNew = last ? tEnd : t + h;
+            double err = pair.attempt(t, h, tNew);
+            if (rejectedAsNotFinite(!Double.isFinite(err))) {
+                h *= 0.1;
+                continue;
+            }
+            double hNew;
+            if (err <= 1.0) {
+                hNew = control.accepted(err, h);
+                accepted++;
+                pair.accept(t, h, tNew);
+                double tOld = t;
+                t = tNew;
+                IntegrationOutcome end = accept(tOld, t, h, pair.state(), last, pair.largest());
+                if (end != null) {
+                    return end;
+                }
+                hNew = nextStep(hNew, h);
+            } else {
+                hNew = control.rejected(err, h);
+                reject();
+            }
+            h = hNew;
+        }
+    }
+
     /** The step after an accepted one: at most hMax, and no growth straight after a rejection. */
     double nextStep(double hNew, double h) {
         if (Math.abs(hNew) > hMax) {

@@ -74,25 +74,31 @@ public final class DormandPrince54 implements Integrator {
         if (early != null) {
             return early;
         }
-        double t = t0;
         double[] rtol = s.relativeTolerances(n);
         double[] atol = s.absoluteTolerances(n);
+        double h = b.firstExplicitStep(s, field, p, t0, y, k1, yStage, k2, rtol, atol, 5);
         boolean uniformTolerances = s.componentRelativeTolerances() == null
                 && s.componentAbsoluteTolerances() == null;
-        double h = b.firstExplicitStep(s, field, p, t, y, k1, yStage, k2, rtol, atol, 5);
-        StepSizeControl control = control();
+        return b.run(new Attempts(b, rtol, atol, observer != null, uniformTolerances), control(), t0, h, tEnd);
+    }
 
-        while (true) {
-            IntegrationOutcome budget = b.beforeAttempt(t, y, h);
-            if (budget != null) {
-                return budget;
-            }
-            boolean last = false;
-            if (b.reachesEnd(t, h, tEnd, 1.01)) {
-                h = tEnd - t;
-                last = true;
-            }
+    /** The stages and error norm of one integration. */
+    private final class Attempts extends AdaptiveStepDriver.PairAttempts {
+        private final boolean uniformTolerances;
+        private double largest;
 
+        Attempts(AdaptiveStepDriver b, double[] rtol, double[] atol, boolean denseOutput, boolean uniformTolerances) {
+            super(b, rtol, atol, denseOutput);
+            this.uniformTolerances = uniformTolerances;
+        }
+
+        @Override
+        public double[] state() {
+            return y;
+        }
+
+        @Override
+        public double attempt(double t, double h, double tNew) {
             for (int i = 0; i < n; i++) {
                 yStage[i] = y[i] + h * A21 * k1[i];
             }
@@ -112,7 +118,6 @@ public final class DormandPrince54 implements Integrator {
             for (int i = 0; i < n; i++) {
                 yStage[i] = y[i] + h * (A61 * k1[i] + A62 * k2[i] + A63 * k3[i] + A64 * k4[i] + A65 * k5[i]);
             }
-            double tNew = last ? tEnd : t + h;
             field.rates(tNew, yStage, p, k6);
             // One pass for the new point and the part of the error sum that does not need k7: the sum is still
             // formed left to right (E1 k1 + ... + E6 k6, then + E7 k7), so results are unchanged.
@@ -126,7 +131,7 @@ public final class DormandPrince54 implements Integrator {
 
             double err = 0;
             double finite = 0; // x - x is 0 for finite x and NaN otherwise, so this is NaN if some yNew[i] is not
-            double largest = 0; // |yNew|_inf, the blow-up test after acceptance
+            double big = 0; // |yNew|_inf, the blow-up test after acceptance
             if (uniformTolerances) {
                 double a = atol[0], r = rtol[0];
                 for (int i = 0; i < n; i++) {
@@ -135,7 +140,7 @@ public final class DormandPrince54 implements Integrator {
                     double e = h * (errPart[i] + E7 * k7[i]) / sk;
                     err += e * e;
                     finite += yi - yi;
-                    largest = Math.max(largest, Math.abs(yi));
+                    big = Math.max(big, Math.abs(yi));
                 }
             } else {
                 for (int i = 0; i < n; i++) {
@@ -144,42 +149,30 @@ public final class DormandPrince54 implements Integrator {
                     double e = h * (errPart[i] + E7 * k7[i]) / sk;
                     err += e * e;
                     finite += yi - yi;
-                    largest = Math.max(largest, Math.abs(yi));
+                    big = Math.max(big, Math.abs(yi));
                 }
             }
-            err = Math.sqrt(err / n);
-            if (b.rejectedAsNotFinite(!Double.isFinite(err) || finite != 0)) {
-                h *= 0.1;
-                continue;
-            }
+            largest = big;
+            return finite != 0 ? Double.NaN : Math.sqrt(err / n);
+        }
 
-            double hNew;
-            if (err <= 1.0) {
-                hNew = control.accepted(err, h);
-                b.accepted++;
-                b.testStiffness(h, tNew, k7, k6, yNew, yStage, STIFF_BOUNDARY);
-                if (observer != null) {
-                    prepareDense(h);
-                }
-                double tOld = t;
-                t = tNew;
-                double[] swap = y;
-                y = yNew;
-                yNew = swap;
-                swap = k1; // first same as last: f(t_new, y_new) is the next step's first stage
-                k1 = k7;
-                k7 = swap;
-                // |y|_inf of the accepted point was measured in the error pass
-                IntegrationOutcome end = b.accept(tOld, t, h, y, last, largest);
-                if (end != null) {
-                    return end;
-                }
-                hNew = b.nextStep(hNew, h);
-            } else {
-                hNew = control.rejected(err, h);
-                b.reject();
+        @Override
+        public void accept(double t, double h, double tNew) {
+            b.testStiffness(h, tNew, k7, k6, yNew, yStage, STIFF_BOUNDARY);
+            if (denseOutput) {
+                prepareDense(h);
             }
-            h = hNew;
+            double[] swap = y;
+            y = yNew;
+            yNew = swap;
+            swap = k1; // first same as last: f(t_new, y_new) is the next step's first stage
+            k1 = k7;
+            k7 = swap;
+        }
+
+        @Override
+        public double largest() {
+            return largest; // measured in the error pass
         }
     }
 

@@ -233,25 +233,27 @@ public final class DormandPrince853 implements Integrator {
         if (early != null) {
             return early;
         }
-        double t = t0;
         double[] rtol = s.relativeTolerances(n);
         double[] atol = s.absoluteTolerances(n);
-        double h = b.firstExplicitStep(s, field, p, t, y, k0, yStage, k1, rtol, atol, 8);
+        double h = b.firstExplicitStep(s, field, p, t0, y, k0, yStage, k1, rtol, atol, 8);
         StepSizeControl control = new StepSizeControl(EXPO, 0, SAFETY, FAC_MIN, FAC_MAX); // no PI term in DOP853
+        return b.run(new Attempts(b, rtol, atol, observer != null), control, t0, h, tEnd);
+    }
 
-        while (true) {
-            IntegrationOutcome budget = b.beforeAttempt(t, y, h);
-            if (budget != null) {
-                return budget;
-            }
-            boolean last = false;
-            if (b.reachesEnd(t, h, tEnd, 1.01)) {
-                h = tEnd - t;
-                last = true;
-            }
+    /** The stages and error norm of one integration. */
+    private final class Attempts extends AdaptiveStepDriver.PairAttempts {
+        Attempts(AdaptiveStepDriver b, double[] rtol, double[] atol, boolean denseOutput) {
+            super(b, rtol, atol, denseOutput);
+        }
 
+        @Override
+        public double[] state() {
+            return y;
+        }
+
+        @Override
+        public double attempt(double t, double h, double tNew) {
             stages(t, h);
-            double tNew = last ? tEnd : t + h;
             field.rates(tNew, yNew, p, k12);
             b.evaluations += 12;
 
@@ -266,38 +268,27 @@ public final class DormandPrince853 implements Integrator {
             }
             double deno = err5 + 0.01 * err3;
             double err = Math.abs(h) * err5 * Math.sqrt(1.0 / (n * (deno <= 0 ? 1.0 : deno)));
-            if (b.rejectedAsNotFinite(!Double.isFinite(err) || !Vectors.allFinite(yNew))) {
-                h *= 0.1;
-                continue;
-            }
+            return Vectors.allFinite(yNew) ? err : Double.NaN;
+        }
 
-            double hNew;
-            if (err <= 1.0) {
-                hNew = control.accepted(err, h);
-                b.accepted++;
-                b.testStiffness(h, tNew, k12, k11, yNew, yStage, STIFF_BOUNDARY);
-                if (observer != null) {
-                    prepareDense(t, h);
-                    b.evaluations += 3;
-                }
-                double tOld = t;
-                t = tNew;
-                double[] swap = y;
-                y = yNew;
-                yNew = swap;
-                swap = k0; // the last stage f(t_new, y_new) is the next step's first
-                k0 = k12;
-                k12 = swap;
-                IntegrationOutcome end = b.accept(tOld, t, h, y, last);
-                if (end != null) {
-                    return end;
-                }
-                hNew = b.nextStep(hNew, h);
-            } else {
-                hNew = control.rejected(err, h);
-                b.reject();
+        @Override
+        public void accept(double t, double h, double tNew) {
+            b.testStiffness(h, tNew, k12, k11, yNew, yStage, STIFF_BOUNDARY);
+            if (denseOutput) {
+                prepareDense(t, h);
+                b.evaluations += 3;
             }
-            h = hNew;
+            double[] swap = y;
+            y = yNew;
+            yNew = swap;
+            swap = k0; // the last stage f(t_new, y_new) is the next step's first
+            k0 = k12;
+            k12 = swap;
+        }
+
+        @Override
+        public double largest() {
+            return Double.NaN; // the driver measures it
         }
     }
 

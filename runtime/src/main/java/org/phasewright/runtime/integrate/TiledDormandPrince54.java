@@ -102,74 +102,71 @@ public final class TiledDormandPrince54 implements Integrator {
         if (early != null) {
             return early;
         }
-        double t = t0;
         double[] rtol = s.relativeTolerances(n);
         double[] atol = s.absoluteTolerances(n);
-        double h = b.firstExplicitStep(s, field, p, t, y, k1, yNew, k7, rtol, atol, 5);
-        StepSizeControl control = DormandPrince54.control();
+        double h = b.firstExplicitStep(s, field, p, t0, y, k1, yNew, k7, rtol, atol, 5);
+        return b.run(new Attempts(b, rtol, atol, observer != null, crew), DormandPrince54.control(), t0, h, tEnd);
+    }
 
-        while (true) {
-            IntegrationOutcome budget = b.beforeAttempt(t, y, h);
-            if (budget != null) {
-                return budget;
-            }
-            boolean last = false;
-            if (b.reachesEnd(t, h, tEnd, 1.01)) {
-                h = tEnd - t;
-                last = true;
-            }
-            double tNew = last ? tEnd : t + h;
-            boolean stiffness = b.stiffnessTestDueNext();
-            attempt(new LatticeTile.Step(t, h, tNew, p, y, k1, yNew, k7, atol[0], rtol[0], s.blowUpBound(), stiffness,
-                    observer == null ? null : pendingDense), crew);
+    /** The tiled stages, sums and state of one integration. */
+    private final class Attempts extends AdaptiveStepDriver.PairAttempts {
+        private final TileCrew crew;
+        private boolean stiffness;
+        private double largest, stiffNumerator, stiffDenominator;
+
+        Attempts(AdaptiveStepDriver b, double[] rtol, double[] atol, boolean denseOutput, TileCrew crew) {
+            super(b, rtol, atol, denseOutput); // the same tolerance for every state (others go to the whole state)
+            this.crew = crew;
+        }
+
+        @Override
+        public double[] state() {
+            return y;
+        }
+
+        @Override
+        public double attempt(double t, double h, double tNew) {
+            stiffness = b.stiffnessTestDueNext();
+            attemptAll(new LatticeTile.Step(t, h, tNew, p, y, k1, yNew, k7, atol[0], rtol[0], b.blowUpBound(),
+                    stiffness, denseOutput ? pendingDense : null), crew);
             b.evaluations += 6;
-
-            double err = 0, largest = 0, num = 0, den = 0;
+            double err = 0, big = 0, num = 0, den = 0;
             for (int k = 0; k < tiles; k++) { // in tile order, whatever the workers
                 err += tileError[k];
-                largest = Math.max(largest, tileLargest[k]);
+                big = Math.max(big, tileLargest[k]);
                 num += tileNumerator[k];
                 den += tileDenominator[k];
             }
-            err = Math.sqrt(err / n);
-            if (b.rejectedAsNotFinite(!Double.isFinite(err) || !(largest <= Double.MAX_VALUE))) {
-                h *= 0.1;
-                continue;
-            }
+            largest = big;
+            stiffNumerator = num;
+            stiffDenominator = den;
+            return big <= Double.MAX_VALUE ? Math.sqrt(err / n) : Double.NaN;
+        }
 
-            double hNew;
-            if (err <= 1.0) {
-                hNew = control.accepted(err, h);
-                b.accepted++;
-                if (stiffness) {
-                    b.testStiffness(h, tNew, num, den, STIFF_BOUNDARY);
-                }
-                if (observer != null) {
-                    dense.swapCoefficients(pendingDense);
-                }
-                double tOld = t;
-                t = tNew;
-                double[] swap = y;
-                y = yNew;
-                yNew = swap;
-                swap = k1; // first same as last
-                k1 = k7;
-                k7 = swap;
-                IntegrationOutcome end = b.accept(tOld, t, h, y, last, largest);
-                if (end != null) {
-                    return end;
-                }
-                hNew = b.nextStep(hNew, h);
-            } else {
-                hNew = control.rejected(err, h);
-                b.reject();
+        @Override
+        public void accept(double t, double h, double tNew) {
+            if (stiffness) {
+                b.testStiffness(h, tNew, stiffNumerator, stiffDenominator, STIFF_BOUNDARY);
             }
-            h = hNew;
+            if (denseOutput) {
+                dense.swapCoefficients(pendingDense);
+            }
+            double[] swap = y;
+            y = yNew;
+            yNew = swap;
+            swap = k1; // first same as last
+            k1 = k7;
+            k7 = swap;
+        }
+
+        @Override
+        public double largest() {
+            return largest; // max |y_new| when some value was near the blow-up bound, else 0 (all well within it)
         }
     }
 
     /** All tiles of one step attempt; worker w takes the w-th of equal runs of tiles. */
-    private void attempt(LatticeTile.Step step, TileCrew crew) {
+    private void attemptAll(LatticeTile.Step step, TileCrew crew) {
         if (crew == null) {
             run(0, step);
         } else {

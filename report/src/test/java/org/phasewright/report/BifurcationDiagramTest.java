@@ -90,7 +90,7 @@ class BifurcationDiagramTest {
                 new Classification("not classified: the rightmost of its 1 eigenvalues did not converge", 0, 0, 0),
                 null);
         ContinuationOutcome o = new ContinuationOutcome("r", 0, 1, ContinuationOutcome.Ending.COMPLETED,
-                List.of(new Branch(1, "start", List.of(known, unknown), "reached r = 1")), List.of(), 2, Double.NaN);
+                List.of(new Branch(1, "start", List.of(known, unknown), "reached r = 1")), List.of(), 2, Double.NaN, 0);
         JFreeChart chart = BifurcationDiagram.chart(new ContinuationResult(o, Status.COMPLETED, "COMPLETED",
                 o.message()), 0, "r", "x", "title", null);
         assertEquals("unstable or unclassified equilibria (dashed)",

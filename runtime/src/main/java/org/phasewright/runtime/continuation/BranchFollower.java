@@ -32,7 +32,7 @@ import org.phasewright.runtime.linalg.SparseMatrix;
  * Large models (above the dense limit) work with the sparse f_u: bordered systems by a sparse LU with the border
  * last, the branch-point test by the sign of that determinant (located by halving), the second tangent at a branch
  * point by inverse iteration with the bordered matrix, and stability and the Hopf test from the rightmost
- * eigenvalues. Not thread-safe.
+ * eigenvalues (from all of them at a state that is the same in every cell of a ring). Not thread-safe.
  */
 public final class BranchFollower {
     private static final int LOCATE_ITERATIONS = 60;
@@ -59,8 +59,12 @@ public final class BranchFollower {
     private final List<double[]> branchPointsSeen = new ArrayList<>();
     private final Deque<Seed> seeds = new ArrayDeque<>();
     private long corrections;
-    /** The parameter at the first point whose listed eigenvalues were all unstable (NaN: none). */
+    /**
+     * The parameter at the first point in [lo, hi] whose partial list of eigenvalues had none left of the axis (NaN:
+     * none), and its branch.
+     */
     private double hopfSightLostAt = Double.NaN;
+    private int hopfSightLostOn, branchNumber;
     private ContinuationOutcome.Ending ending = ContinuationOutcome.Ending.COMPLETED;
 
     /** A place to start a branch: a point on it, the direction to go, and where it came from. */
@@ -135,7 +139,8 @@ public final class BranchFollower {
             }
             trace(seed);
         }
-        return new ContinuationOutcome(name(), from, to, ending, branches, specials, corrections, hopfSightLostAt);
+        return new ContinuationOutcome(name(), from, to, ending, branches, specials, corrections, hopfSightLostAt,
+                hopfSightLostOn);
     }
 
     private String name() {
@@ -144,6 +149,7 @@ public final class BranchFollower {
 
     private void trace(Seed seed) {
         int number = branches.size() + 1;
+        branchNumber = number;
         List<ContinuationPoint> points = new ArrayList<>();
         double[] x = seed.x().clone();
         double[] t = corrector.tangent(x, seed.direction());
@@ -200,16 +206,7 @@ public final class BranchFollower {
                     located.add(l);
                 }
             }
-            located.sort(Comparator.comparingDouble(Located::arclength)); // several in one step
-            Located previous = null;
-            for (Located l : located) {
-                if (previous != null && sameHopfPoint(previous.special(), l.special())) {
-                    continue; // a double pair (two equal pairs, as modes k and -k of a symmetric ring) crossing
-                }
-                specials.add(l.special());
-                points.add(l.point());
-                previous = l;
-            }
+            addInArclengthOrder(located, points);
             if (outside) {
                 double[] boundary = boundary(x, next);
                 if (boundary != null) {
@@ -370,6 +367,28 @@ public final class BranchFollower {
         return located;
     }
 
+    /**
+     * The special points located in one step, in arclength order, to the special points and the branch. A double
+     * pair (two equal pairs, as modes k and -k of a symmetric ring) is located twice and kept once, without a first
+     * Lyapunov coefficient: the one computed from an arbitrary eigenvector of its 4-dimensional centre space means
+     * nothing.
+     */
+    private void addInArclengthOrder(List<Located> located, List<ContinuationPoint> points) {
+        located.sort(Comparator.comparingDouble(Located::arclength));
+        SpecialPoint previous = null;
+        for (Located l : located) {
+            if (previous != null && sameHopfPoint(previous, l.special())) {
+                previous = new SpecialPoint(previous.kind(), previous.branch(), previous.parameter(), previous.state(),
+                        previous.frequency(), Double.NaN);
+                specials.set(specials.size() - 1, previous);
+                continue;
+            }
+            previous = l.special();
+            specials.add(previous);
+            points.add(l.point());
+        }
+    }
+
     /** Two Hopf points of one step at the same point with the same frequency. */
     private boolean sameHopfPoint(SpecialPoint a, SpecialPoint b) {
         if (a.kind() != SpecialPoint.Kind.HOPF || b.kind() != SpecialPoint.Kind.HOPF
@@ -476,8 +495,10 @@ public final class BranchFollower {
             frequency[k] = pairs.get(k)[1];
         }
         boolean finite = !Double.isNaN(lowest);
-        if (finite && re.length > 0 && re.length < n && !(lowest < -tolerance) && Double.isNaN(hopfSightLostAt)) {
+        if (finite && re.length > 0 && re.length < n && !(lowest < -tolerance) && Double.isNaN(hopfSightLostAt)
+                && x[n] >= lo && x[n] <= hi) {
             hopfSightLostAt = x[n]; // pairs crossing further down the spectrum are out of the Hopf test's sight
+            hopfSightLostOn = branchNumber;
         }
         return new Tests(t[n], corrector.branchTest(x, t), real, frequency, unstableReals,
                 finite && (re.length == n || lowest < -tolerance));
@@ -519,10 +540,10 @@ public final class BranchFollower {
         LinearStability s = stability(x);
         double[] re = s.real(), im = s.imaginary();
         int keep = re.length;
-        if (jac == null && keep > RightmostEigenvalues.WANTED) { // a ring's whole spectrum: the rightmost, as listed
-            keep = RightmostEigenvalues.WANTED;
-            if (im[keep - 1] > 0 && im[keep] < 0) { // not half a pair
-                keep++;
+        if (jac == null && keep == n && n > RightmostEigenvalues.WANTED) { // a ring's whole spectrum: as listed
+            int halves = 0; // +b members minus -b members kept: no pair is cut in half
+            for (keep = 0; keep < re.length && (keep < RightmostEigenvalues.WANTED || halves != 0); keep++) {
+                halves += im[keep] > 0 ? 1 : im[keep] < 0 ? -1 : 0;
             }
         }
         return new ContinuationPoint(x[n], Arrays.copyOf(x, n), Arrays.copyOf(re, keep), Arrays.copyOf(im, keep),

@@ -7,11 +7,12 @@ import java.util.List;
  *
  * @param corrections     Newton corrections over all branches (a measure of work)
  * @param hopfSightLostAt the parameter value at the first point where a large model's list of rightmost
- *                        eigenvalues held only unstable ones, so pairs crossing the imaginary axis further down were
+ *                        eigenvalues held none left of the imaginary axis, so pairs crossing it further down could be
  *                        out of the Hopf test's sight; NaN when that never happened
+ * @param hopfSightLostOn the number of that point's branch (0 when none)
  */
 public record ContinuationOutcome(String parameterName, double from, double to, Ending ending, List<Branch> branches,
-        List<SpecialPoint> specialPoints, long corrections, double hopfSightLostAt) {
+        List<SpecialPoint> specialPoints, long corrections, double hopfSightLostAt, int hopfSightLostOn) {
 
     /** COMPLETED: every branch ran to an end of its own; the others stopped early and keep what was found. */
     public enum Ending { COMPLETED, WORK_LIMIT, TIME_LIMIT, CANCELLED }

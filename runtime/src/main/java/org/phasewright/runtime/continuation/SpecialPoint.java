@@ -42,7 +42,7 @@ public record SpecialPoint(Kind kind, int branch, double parameter, double[] sta
             return null;
         }
         if (Double.isNaN(firstLyapunovCoefficient)) {
-            return "criticality not computed"; // its eigenvectors or solves failed
+            return "criticality not computed"; // its eigenvectors or solves failed, or two equal pairs cross together
         }
         if (Double.isInfinite(firstLyapunovCoefficient) || firstLyapunovCoefficient == 0) {
             return "degenerate";

@@ -104,10 +104,12 @@ final class ContinuationRunner {
         }
         if (large) {
             message += "; a model of " + model.dimension() + " states is followed with its sparse Jacobian: "
-                    + "stability from the rightmost eigenvalues, no periodic orbits from Hopf points";
+                    + "stability from the rightmost eigenvalues (all of them at a state the same in every cell of a "
+                    + "ring), no periodic orbits from Hopf points";
             if (!Double.isNaN(outcome.hopfSightLostAt())) {
                 message += "; from " + parameters.name() + " = " + BranchFollower.number(outcome.hopfSightLostAt())
-                        + " every listed eigenvalue is unstable, and further Hopf points are not looked for";
+                        + " on branch " + outcome.hopfSightLostOn() + " every listed eigenvalue is unstable, so Hopf "
+                        + "points further down the spectrum may be missed";
             }
         }
         if (search.ending() != EquilibriumSearchOutcome.Ending.COMPLETED) {

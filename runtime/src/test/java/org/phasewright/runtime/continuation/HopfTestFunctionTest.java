@@ -222,6 +222,8 @@ class HopfTestFunctionTest {
         List<SpecialPoint> dense = hopf(model(crossing, crossing, STABLE_FOCUS), -0.5, 0.5);
         assertEquals(1, dense.size());
         assertEquals(0.0, dense.get(0).parameter(), 1e-9);
+        // two equal pairs span a 4-dimensional centre space: no first Lyapunov coefficient of one pair applies
+        assertEquals("criticality not computed", dense.get(0).criticality());
         List<SpecialPoint> sparse = hopf(model(withStableFoci(101, 0.05, crossing, crossing)), -0.5, 0.5);
         assertEquals(1, sparse.size());
         assertEquals(0.0, sparse.get(0).parameter(), 1e-8);

@@ -143,6 +143,13 @@ class LargeContinuationTest {
         assertEquals(cell / 150, hopf.get(0).firstLyapunovCoefficient(), 1e-5 * Math.abs(cell / 150));
         assertEquals("supercritical", hopf.get(0).criticality());
         assertTrue(r.cycles().isEmpty());
+        // points list the rightmost of the ring's whole spectrum without cutting a pair (modes ±k give equal pairs)
+        for (ContinuationPoint p : r.continuation().branches().get(0).points()) {
+            long upper = java.util.Arrays.stream(p.eigenvaluesImag()).filter(im -> im > 0).count();
+            long lower = java.util.Arrays.stream(p.eigenvaluesImag()).filter(im -> im < 0).count();
+            assertEquals(upper, lower, "at B = " + p.parameter());
+            assertTrue(p.eigenvaluesReal().length >= 12 && p.eigenvaluesReal().length <= 14);
+        }
         // the summary's table of special points keeps the first 16 of the 300 states (our own output rule)
         String summary = TextSummary.render(study);
         assertTrue(summary.contains("u[16]  ...  notes"), summary);
@@ -178,7 +185,7 @@ class LargeContinuationTest {
             assertEquals(expected.get(j)[0], hopf.get(j).parameter(), 1e-8, "Hopf point " + j);
             assertEquals(expected.get(j)[1], hopf.get(j).frequency(), 1e-7, "Hopf point " + j);
         }
-        assertTrue(!r.message().contains("further Hopf points"), r.message());
+        assertTrue(!r.message().contains("may be missed"), r.message());
     }
 
     @Test
@@ -203,8 +210,12 @@ class LargeContinuationTest {
         }
         double lost = r.continuation().hopfSightLostAt();
         assertTrue(lost >= 0.05 - 1e-8 && lost < 0.06, "lost sight at " + lost);
-        assertTrue(r.message().contains("every listed eigenvalue is unstable, and further Hopf points are not "
-                + "looked for"), r.message());
+        assertTrue(r.message().contains(" on branch 1 every listed eigenvalue is unstable, so Hopf points further "
+                + "down the spectrum may be missed"), r.message());
+        // ending just before: no point in the interval loses sight (the step past its end does not count)
+        ContinuationResult shorter = follow(m, "lambda", -0.1, 0.0499);
+        assertTrue(Double.isNaN(shorter.continuation().hopfSightLostAt()), shorter.message());
+        assertTrue(!shorter.message().contains("may be missed"), shorter.message());
     }
 
     /** x_i' = λ x_i - x_i³ + D (x_{i-1} - 2x_i + x_{i+1}) on a ring. */

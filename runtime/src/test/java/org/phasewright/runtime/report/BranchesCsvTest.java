@@ -22,7 +22,7 @@ class BranchesCsvTest {
                 new Classification("not classified: the rightmost of its 1 eigenvalues did not converge", 0, 0, 0),
                 null);
         ContinuationOutcome o = new ContinuationOutcome("p", 1, 2, ContinuationOutcome.Ending.COMPLETED,
-                List.of(new Branch(1, "start", List.of(known, unknown), "reached p = 2")), List.of(), 2, Double.NaN);
+                List.of(new Branch(1, "start", List.of(known, unknown), "reached p = 2")), List.of(), 2, Double.NaN, 0);
         String[] rows = BranchesCsv.render(List.of("x"), o).split("\r?\n");
         assertEquals("branch,point,p,x,stable,unstable_dimension,type,special", rows[0]);
         assertTrue(rows[1].startsWith("1,1,1.0,0.5,true,0,stable node,"), rows[1]);

@@ -207,11 +207,7 @@ final class Corrector {
     }
 
     static double dot(double[] a, double[] b) {
-        double s = 0;
-        for (int i = 0; i < a.length; i++) {
-            s += a[i] * b[i];
-        }
-        return s;
+        return Vectors.dot(a, b);
     }
 
     static double norm(double[] a) {

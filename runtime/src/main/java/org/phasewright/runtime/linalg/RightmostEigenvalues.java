@@ -297,21 +297,14 @@ public final class RightmostEigenvalues {
             for (int pass = 0; pass < 2; pass++) {
                 for (int r = 0; r < count; r++) {
                     double[] b = v[r];
-                    double dot = 0;
-                    for (int i = 0; i < n; i++) {
-                        dot += b[i] * x[i];
-                    }
+                    double dot = Vectors.dot(b, x);
                     coefficients[r] += dot;
                     for (int i = 0; i < n; i++) {
                         x[i] -= dot * b[i];
                     }
                 }
             }
-            double s = 0;
-            for (double xi : x) {
-                s += xi * xi;
-            }
-            return Math.sqrt(s);
+            return Math.sqrt(Vectors.dot(x, x));
         }
 
         /** A Ritz value μ of C, the real basis of its vector in the projected space (one column, or two for a pair). */
@@ -347,7 +340,7 @@ public final class RightmostEigenvalues {
                     y = vectors.getColumn(k + 1);
                 }
                 double lastSquared = x[size - 1] * x[size - 1] + (y == null ? 0 : y[size - 1] * y[size - 1]);
-                double normSquared = dot(x, x) + (y == null ? 0 : dot(y, y));
+                double normSquared = Vectors.dot(x, x) + (y == null ? 0 : Vectors.dot(y, y));
                 double residual = Math.abs(tail) * Math.sqrt(lastSquared / normSquared);
                 boolean converged = residual <= RESIDUAL * Math.max(Math.hypot(re[k], im[k]), 1e-3);
                 out.add(new Ritz(re[k], Math.abs(im[k]), x, y, converged, k));
@@ -392,13 +385,13 @@ public final class RightmostEigenvalues {
             for (double[] c : columns) {
                 for (int pass = 0; pass < 2; pass++) {
                     for (double[] b : q) {
-                        double d = dot(b, c);
+                        double d = Vectors.dot(b, c);
                         for (int i = 0; i < size; i++) {
                             c[i] -= d * b[i];
                         }
                     }
                 }
-                double norm = Math.sqrt(dot(c, c));
+                double norm = Math.sqrt(Vectors.dot(c, c));
                 if (norm > 1e-10) {
                     for (int i = 0; i < size; i++) {
                         c[i] /= norm;
@@ -438,7 +431,7 @@ public final class RightmostEigenvalues {
                     hq[r] = t;
                 }
                 for (int b = 0; b < k; b++) {
-                    s[b][a] = dot(q.get(b), hq);
+                    s[b][a] = Vectors.dot(q.get(b), hq);
                 }
                 s[k][a] = tail * q.get(a)[size - 1];
             }
@@ -499,7 +492,7 @@ public final class RightmostEigenvalues {
             double[] y = new double[size];
             for (int r = 0; r < Math.min(take, ritz.size()); r++) {
                 double[] x = ritz.get(r).vectorRe;
-                double norm = Math.sqrt(dot(x, x));
+                double norm = Math.sqrt(Vectors.dot(x, x));
                 for (int i = 0; i < size && norm > 0; i++) {
                     y[i] += x[i] / norm;
                 }
@@ -513,7 +506,7 @@ public final class RightmostEigenvalues {
                     }
                 }
             }
-            wantedSum = dot(sum, sum) > 0 ? sum : null;
+            wantedSum = Vectors.dot(sum, sum) > 0 ? sum : null;
         }
 
         /** λ = σ (μ + 1)/(μ − 1) for μ = a + ib. */
@@ -527,18 +520,11 @@ public final class RightmostEigenvalues {
         }
 
         private void normalise(double[] x) {
-            double s = Math.sqrt(dot(x, x));
+            double s = Math.sqrt(Vectors.dot(x, x));
             for (int i = 0; i < x.length; i++) {
                 x[i] /= s;
             }
         }
 
-        private static double dot(double[] a, double[] b) {
-            double s = 0;
-            for (int i = 0; i < a.length; i++) {
-                s += a[i] * b[i];
-            }
-            return s;
-        }
     }
 }

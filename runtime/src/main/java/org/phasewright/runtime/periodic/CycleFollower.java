@@ -13,6 +13,7 @@ import org.phasewright.runtime.continuation.ParameterVector;
 import org.phasewright.runtime.continuation.RegulaFalsiBracket;
 import org.phasewright.runtime.continuation.SquareSolve;
 import org.phasewright.runtime.integrate.IntegratorSettings;
+import org.phasewright.runtime.linalg.Vectors;
 
 /**
  * Follows the periodic orbits born at a Hopf point by single shooting with pseudo-arclength continuation in
@@ -120,7 +121,7 @@ public final class CycleFollower {
             double[] ty = y == null ? null : secant(x, y);
             // the first direction comes from the Hopf point, not from two orbits: it may differ from the family's
             // direction by the slant of the phase plane, so only later directions are held to the turning limit
-            if (ty == null || (secantOfOrbits && dot(ty, t) < 0.9)) {
+            if (ty == null || (secantOfOrbits && Vectors.dot(ty, t) < 0.9)) {
                 h /= 2;
                 if (h < 1e-8 * hMax) {
                     end = "step size too small";
@@ -316,7 +317,7 @@ public final class CycleFollower {
         for (int i = 0; i < x.length; i++) {
             d[i] = y[i] - x[i];
         }
-        double norm = Math.sqrt(dot(d, d));
+        double norm = Math.sqrt(Vectors.dot(d, d));
         if (!(norm > 0) || !Double.isFinite(norm)) {
             return null;
         }
@@ -387,7 +388,7 @@ public final class CycleFollower {
                 }
             }
             double[] v = e.getV().getColumn(best);
-            double norm = Math.sqrt(dot(v, v));
+            double norm = Math.sqrt(Vectors.dot(v, v));
             for (int i = 0; i < n; i++) {
                 v[i] /= norm;
             }
@@ -403,13 +404,5 @@ public final class CycleFollower {
             out[i] = x[i] + h * t[i];
         }
         return out;
-    }
-
-    private static double dot(double[] a, double[] b) {
-        double s = 0;
-        for (int i = 0; i < a.length; i++) {
-            s += a[i] * b[i];
-        }
-        return s;
     }
 }

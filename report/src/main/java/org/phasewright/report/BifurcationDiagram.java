@@ -15,6 +15,8 @@ import org.jfree.chart.LegendItemCollection;
 import org.jfree.chart.annotations.XYTextAnnotation;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.ui.TextAnchor;
+import org.jfree.data.Range;
+import org.jfree.data.general.DatasetUtils;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 import org.phasewright.runtime.continuation.Branch;
@@ -111,7 +113,14 @@ final class BifurcationDiagram {
         lines.setSeriesPaint(series, PlotStyle.INK);
 
         XYPlot plot = new XYPlot(data, PlotStyle.axis(xLabel), PlotStyle.axis(yLabel), lines);
-        labels.forEach(plot::addAnnotation);
+        List<XYTextAnnotation> shown = legible(labels, DatasetUtils.findDomainBounds(data, false),
+                DatasetUtils.findRangeBounds(data, false)); // the values' own ranges, not widened by bar widths
+        shown.forEach(plot::addAnnotation);
+        if (shown.size() < labels.size()) {
+            String note = "labels on " + shown.size() + " of " + labels.size() + " special points (all are listed in "
+                    + "summary.txt)";
+            subtitle = subtitle == null ? note : subtitle + "; " + note;
+        }
         LegendItemCollection legend = new LegendItemCollection();
         legend.add(item("stable equilibria (solid)", equilibria, SOLID));
         // a point that could not be classified (a large model whose eigenvalues did not converge) is not called
@@ -163,6 +172,39 @@ final class BifurcationDiagram {
         lines.setSeriesStroke(series, stable ? SOLID : DASHED);
         lines.setSeriesShapesVisible(series, false);
         return series + 1;
+    }
+
+    /**
+     * The labels that can be read: in order of the parameter, a label is kept when it lies at least 8% of the
+     * parameter range or 4% of the state range (about a label's length and height on the report's chart) from every
+     * label kept before it. The points themselves stay marked. Labels in the right quarter read leftwards, so the
+     * plot's edge does not cut them.
+     */
+    static List<XYTextAnnotation> legible(List<XYTextAnnotation> labels, Range x, Range y) {
+        if (x == null || y == null) {
+            return labels;
+        }
+        double width = 0.08 * x.getLength(), height = 0.04 * y.getLength();
+        List<XYTextAnnotation> sorted = new ArrayList<>(labels);
+        sorted.sort(java.util.Comparator.comparingDouble(XYTextAnnotation::getX));
+        List<XYTextAnnotation> kept = new ArrayList<>();
+        for (XYTextAnnotation a : sorted) {
+            boolean clear = true;
+            for (XYTextAnnotation k : kept) {
+                if (Math.abs(a.getX() - k.getX()) < width && Math.abs(a.getY() - k.getY()) < height) {
+                    clear = false;
+                    break;
+                }
+            }
+            if (clear) {
+                if (a.getX() > x.getUpperBound() - 0.25 * x.getLength()) { // read leftwards near the right edge
+                    a.setText(a.getText().strip() + "  ");
+                    a.setTextAnchor(TextAnchor.BOTTOM_RIGHT);
+                }
+                kept.add(a);
+            }
+        }
+        return kept;
     }
 
     private static XYTextAnnotation label(String text, double x, double y) {

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.awt.BasicStroke;
+import java.util.ArrayList;
 import java.util.List;
 
 import org.jfree.chart.JFreeChart;
@@ -20,6 +21,7 @@ import org.phasewright.runtime.continuation.ContinuationOutcome;
 import org.phasewright.runtime.continuation.ContinuationPoint;
 import org.phasewright.runtime.continuation.ContinuationSettings;
 import org.phasewright.runtime.continuation.ParameterVector;
+import org.phasewright.runtime.continuation.SpecialPoint;
 import org.phasewright.runtime.equilibria.Classification;
 import org.phasewright.runtime.model.Binary;
 import org.phasewright.runtime.model.BinaryOperator;
@@ -95,5 +97,45 @@ class BifurcationDiagramTest {
                 o.message()), 0, "r", "x", "title", null);
         assertEquals("unstable or unclassified equilibria (dashed)",
                 chart.getXYPlot().getFixedLegendItems().get(1).getLabel());
+    }
+
+    @Test
+    void crowdedSpecialPointsKeepTheirMarksButOnlyLegibleLabels() {
+        // our own drawing rule: 30 Hopf points within 3% of the parameter range (as a ring's cascade of modes) and
+        // a fold far from them; every point stays marked, overlapping labels are left out and the subtitle says so
+        List<ContinuationPoint> points = new ArrayList<>();
+        List<SpecialPoint> specials = new ArrayList<>();
+        for (int k = 0; k <= 100; k++) {
+            points.add(new ContinuationPoint(k / 100.0, new double[] {k / 100.0}, new double[] {-1},
+                    new double[] {0}, new Classification("stable node", 1, 0, 0), null));
+        }
+        specials.add(new SpecialPoint(SpecialPoint.Kind.FOLD, 1, 0.2, new double[] {0.2}, Double.NaN, Double.NaN));
+        for (int k = 0; k < 30; k++) {
+            double r = 0.9 + 0.001 * k;
+            specials.add(new SpecialPoint(SpecialPoint.Kind.HOPF, 1, r, new double[] {r}, 1, -0.01));
+        }
+        ContinuationOutcome o = new ContinuationOutcome("r", 0, 1, ContinuationOutcome.Ending.COMPLETED,
+                List.of(new Branch(1, "start", points, "reached r = 1")), specials, 2, Double.NaN, 0);
+        JFreeChart chart = BifurcationDiagram.chart(new ContinuationResult(o, Status.COMPLETED, "COMPLETED",
+                o.message()), 0, "r", "x", "title", "1 branch");
+        XYPlot plot = chart.getXYPlot();
+        List<String> labels = plot.getAnnotations().stream().filter(XYTextAnnotation.class::isInstance)
+                .map(a -> ((XYTextAnnotation) a).getText().strip()).toList();
+        assertEquals(List.of("fold", "Hopf (supercritical)"), labels);
+        // the fold's label reads rightwards; the Hopf label, in the right quarter, leftwards (not cut by the edge)
+        List<org.jfree.chart.ui.TextAnchor> anchors = plot.getAnnotations().stream()
+                .map(a -> ((XYTextAnnotation) a).getTextAnchor()).toList();
+        assertEquals(List.of(org.jfree.chart.ui.TextAnchor.BOTTOM_LEFT, org.jfree.chart.ui.TextAnchor.BOTTOM_RIGHT),
+                anchors);
+        int marks = plot.getDataset().getItemCount(plot.getDataset().indexOf("special points"));
+        assertEquals(31, marks);
+        List<String> subtitles = new ArrayList<>();
+        for (int k = 0; k < chart.getSubtitleCount(); k++) {
+            if (chart.getSubtitle(k) instanceof org.jfree.chart.title.TextTitle t) {
+                subtitles.add(t.getText());
+            }
+        }
+        assertTrue(subtitles.contains("1 branch; labels on 2 of 31 special points (all are listed in summary.txt)"),
+                subtitles.toString());
     }
 }

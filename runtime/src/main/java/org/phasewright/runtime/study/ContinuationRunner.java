@@ -2,7 +2,6 @@ package org.phasewright.runtime.study;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
 
 import org.phasewright.runtime.compile.CompiledModel;
 import org.phasewright.runtime.compile.SparseJacobian;
@@ -12,10 +11,7 @@ import org.phasewright.runtime.continuation.ContinuationSettings;
 import org.phasewright.runtime.continuation.ParameterVector;
 import org.phasewright.runtime.continuation.SpecialPoint;
 import org.phasewright.runtime.equilibria.Equilibrium;
-import org.phasewright.runtime.equilibria.EquilibriumFinder;
 import org.phasewright.runtime.equilibria.EquilibriumSearchOutcome;
-import org.phasewright.runtime.equilibria.PolynomialRoots;
-import org.phasewright.runtime.equilibria.StartPoints;
 import org.phasewright.runtime.model.EquilibriumContinuation;
 import org.phasewright.runtime.periodic.CycleBranch;
 import org.phasewright.runtime.periodic.CycleFollower;
@@ -66,25 +62,10 @@ final class ContinuationRunner {
         } catch (ModelEvaluationException e) {
             return new ContinuationResult(null, Status.FAILED, "INVALID_INPUT", e.getMessage());
         }
-        EquilibriumSearchOutcome search;
-        if (large) { // sparse Newton from a few starts, as an equilibrium search of a large model
-            StartPoints starts = EquilibriumSearchRunner.largeStarts(p, initial, EquilibriumSearchRunner.shortRun(
-                    model, p, initial, EquilibriumSearchRunner.LARGE_SHORT_RUN_STEPS,
-                    EquilibriumSearchRunner.LARGE_TRAJECTORY_STARTS, settings, budget), settings);
-            search = new EquilibriumFinder(model.field(), p, EquilibriumSearchRunner.largeSettings(settings))
-                    .find(starts, budget.deadlineNanos(), budget.cancelled());
-        } else {
-            StartPoints starts = StartPoints.build(p, initial, EquilibriumSearchRunner.shortRun(model, p, initial,
-                    EquilibriumSearchRunner.SHORT_RUN_STEPS, Integer.MAX_VALUE, settings, budget),
-                    settings.equilibria());
-            Optional<PolynomialRoots.Summary> homotopy = PolynomialRoots.find(model.model(), p,
-                    budget.deadlineNanos(), budget.cancelled());
-            if (homotopy.isPresent()) {
-                starts = starts.withLeading(homotopy.get().realRoots());
-            }
-            search = new EquilibriumFinder(model.field(), p, settings.equilibria())
-                    .find(starts, budget.deadlineNanos(), budget.cancelled());
-        }
+        // the equilibria at the start, searched as an equilibrium study searches them
+        EquilibriumSearchOutcome search = EquilibriumSearchRunner.search(model, p, initial,
+                EquilibriumSearchRunner.runPoints(model, p, initial, large, settings, budget), large, settings,
+                budget).outcome();
         List<double[]> roots = search.equilibria().stream().map(Equilibrium::coordinates).toList();
         ContinuationOutcome outcome = new BranchFollower(model.field(), parameters, base.length, from, to,
                 ContinuationSettings.DEFAULT.withBlowUpBound(settings.blowUpBound()), budget.deadlineNanos(),

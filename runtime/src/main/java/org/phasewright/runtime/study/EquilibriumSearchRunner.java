@@ -22,11 +22,11 @@ import org.phasewright.runtime.symmetry.SymmetryReport;
 /** Runs one equilibrium search, seeding Newton from a trajectory of the study or from a short one of its own. */
 final class EquilibriumSearchRunner {
     /** Steps of the exploratory trajectory when the study has none: enough to see transients, cheap for any model. */
-    static final int SHORT_RUN_STEPS = 2000;
+    private static final int SHORT_RUN_STEPS = 2000;
     /** Large models: trajectory points kept as Newton starts, steps of the short run, Newton iterations in all. */
-    static final int LARGE_TRAJECTORY_STARTS = 4;
-    static final int LARGE_SHORT_RUN_STEPS = 200;
-    static final long LARGE_ITERATIONS = 100;
+    private static final int LARGE_TRAJECTORY_STARTS = 4;
+    private static final int LARGE_SHORT_RUN_STEPS = 200;
+    private static final long LARGE_ITERATIONS = 100;
 
     private EquilibriumSearchRunner() {
     }
@@ -42,21 +42,48 @@ final class EquilibriumSearchRunner {
             return large(model, p, trajectory, settings, budget);
         }
         List<double[]> points = trajectory != null ? rows(trajectory, Integer.MAX_VALUE)
-                : shortRun(model, p, model.initialState(), SHORT_RUN_STEPS, Integer.MAX_VALUE, settings, budget);
-        StartPoints starts = StartPoints.build(p, model.initialState(), points, settings.equilibria());
-        // Polynomial rate laws: every isolated root by homotopy; its real roots are tried first.
-        Optional<PolynomialRoots.Summary> homotopy = PolynomialRoots.find(model.model(), p, budget.deadlineNanos(),
-                budget.cancelled());
+                : runPoints(model, p, model.initialState(), false, settings, budget);
+        Search found = search(model, p, model.initialState(), points, false, settings, budget);
+        EquilibriumSearchOutcome search = found.outcome();
+        Status status = search.ending() == EquilibriumSearchOutcome.Ending.COMPLETED ? Status.COMPLETED
+                : Status.INCOMPLETE;
+        String message = search.message() + found.homotopy().map(h -> "; " + h.message()).orElse("");
+        return new EquilibriumResult(search.equilibria(), search, status, search.ending().name(), message,
+                symmetry(model, search.equilibria()));
+    }
+
+    /**
+     * What a search found, from how many starts, and the polynomial homotopy's summary (empty for a large model or
+     * rates that are not polynomials).
+     */
+    record Search(EquilibriumSearchOutcome outcome, int starts, Optional<PolynomialRoots.Summary> homotopy) {
+    }
+
+    /**
+     * Equilibria at parameters p by Newton from the initial state, the origin and {@code points} (late points of a
+     * run). A small model also starts from the real roots of the polynomial homotopy first, when its rate laws are
+     * polynomials; a large one takes sparse Newton from those few starts only (the homotopy's start system has a
+     * root count exponential in the dimension), with fewer iterations.
+     */
+    static Search search(CompiledModel model, double[] p, double[] initial, List<double[]> points, boolean large,
+            RunSettings settings, Budget budget) {
+        EquilibriumSettings equilibria = large ? largeSettings(settings) : settings.equilibria();
+        StartPoints starts = StartPoints.build(p, initial, points, equilibria);
+        Optional<PolynomialRoots.Summary> homotopy = large ? Optional.empty()
+                : PolynomialRoots.find(model.model(), p, budget.deadlineNanos(), budget.cancelled());
         if (homotopy.isPresent()) {
             starts = starts.withLeading(homotopy.get().realRoots());
         }
-        EquilibriumSearchOutcome search = new EquilibriumFinder(model.field(), p, settings.equilibria())
+        EquilibriumSearchOutcome outcome = new EquilibriumFinder(model.field(), p, equilibria)
                 .find(starts, budget.deadlineNanos(), budget.cancelled());
-        Status status = search.ending() == EquilibriumSearchOutcome.Ending.COMPLETED ? Status.COMPLETED
-                : Status.INCOMPLETE;
-        String message = search.message() + homotopy.map(h -> "; " + h.message()).orElse("");
-        return new EquilibriumResult(search.equilibria(), search, status, search.ending().name(), message,
-                symmetry(model, search.equilibria()));
+        return new Search(outcome, starts.points().size(), homotopy);
+    }
+
+    /** The late points of a short run from {@code initial} that {@link #search} starts from besides the others. */
+    static List<double[]> runPoints(CompiledModel model, double[] p, double[] initial, boolean large,
+            RunSettings settings, Budget budget) {
+        return large ? shortRun(model, p, initial, LARGE_SHORT_RUN_STEPS, LARGE_TRAJECTORY_STARTS, settings, budget)
+                : shortRun(model, p, initial, SHORT_RUN_STEPS, Integer.MAX_VALUE, settings, budget);
     }
 
     /**
@@ -72,33 +99,26 @@ final class EquilibriumSearchRunner {
                     + " states needs a sparse Jacobian for Newton's method, but its Jacobian has too many nonzeros");
         }
         List<double[]> points = trajectory != null ? rows(trajectory, LARGE_TRAJECTORY_STARTS)
-                : shortRun(model, p, model.initialState(), LARGE_SHORT_RUN_STEPS, LARGE_TRAJECTORY_STARTS,
-                        settings, budget);
-        StartPoints starts = largeStarts(p, model.initialState(), points, settings);
-        EquilibriumSearchOutcome search = new EquilibriumFinder(model.field(), p, largeSettings(settings))
-                .find(starts, budget.deadlineNanos(), budget.cancelled());
+                : runPoints(model, p, model.initialState(), true, settings, budget);
+        Search found = search(model, p, model.initialState(), points, true, settings, budget);
+        EquilibriumSearchOutcome search = found.outcome();
         Status status = search.ending() == EquilibriumSearchOutcome.Ending.COMPLETED ? Status.COMPLETED
                 : Status.INCOMPLETE;
         String message = search.message() + "; a model of " + n + " states (more than "
-                + SparseJacobian.DENSE_LIMIT + ") is searched by sparse Newton from " + starts.points().size()
-                + " starts without polynomial homotopy; each equilibrium is classified by its rightmost eigenvalues from the"
-                + " sparse Jacobian (all eigenvalues when it is the same in every cell of a ring), and at most "
+                + SparseJacobian.DENSE_LIMIT + ") is searched by sparse Newton from " + found.starts()
+                + " starts without polynomial homotopy; each equilibrium is classified by its rightmost eigenvalues "
+                + "from the sparse Jacobian (all eigenvalues when it is the same in every cell of a ring), and at most "
                 + RightmostEigenvalues.WANTED + " are listed";
         return new EquilibriumResult(search.equilibria(), search, status, search.ending().name(), message,
                 symmetry(model, search.equilibria()));
     }
 
     /** The equilibrium settings of a large model's search: no quasi-random starts, fewer Newton iterations. */
-    static EquilibriumSettings largeSettings(RunSettings settings) {
+    private static EquilibriumSettings largeSettings(RunSettings settings) {
         EquilibriumSettings defaults = settings.equilibria();
         return new EquilibriumSettings(0, LARGE_TRAJECTORY_STARTS, defaults.maxNewtonIterations(),
                 Math.min(defaults.maxTotalIterations(), LARGE_ITERATIONS), defaults.residualTolerance(),
                 defaults.stepTolerance(), defaults.duplicateTolerance(), defaults.eigenTolerance());
-    }
-
-    /** Starts of a large model's search: the initial state, the origin and the given points of a run. */
-    static StartPoints largeStarts(double[] p, double[] initial, List<double[]> points, RunSettings settings) {
-        return StartPoints.build(p, initial, points, largeSettings(settings));
     }
 
     /** Orbits, isotropy and invariant subspaces under the declared symmetries (empty when there are none). */
@@ -123,7 +143,7 @@ final class EquilibriumSearchRunner {
      * step limit ends it), so the sample does not depend on guessing the model's time scale. Only {@code keep}
      * points are held at a time, since each costs n doubles.
      */
-    static List<double[]> shortRun(CompiledModel model, double[] p, double[] initial, int maxSteps, int keep,
+    private static List<double[]> shortRun(CompiledModel model, double[] p, double[] initial, int maxSteps, int keep,
             RunSettings settings, Budget budget) {
         ArrayDeque<double[]> last = new ArrayDeque<>();
         IntegratorSettings s = IntegratorSettings.DEFAULT.withMaxSteps(maxSteps)

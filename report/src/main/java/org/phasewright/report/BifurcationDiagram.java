@@ -127,7 +127,7 @@ final class BifurcationDiagram {
         // stable, so it is drawn dashed too: the legend says so when there is one
         boolean unclassified = result.continuation().branches().stream().flatMap(b -> b.points().stream())
                 .map(ContinuationPoint::classification)
-                .anyMatch(c -> c.stableDimension() + c.unstableDimension() + c.centreDimension() == 0);
+                .anyMatch(c -> !c.classified());
         legend.add(item(unclassified ? "unstable or unclassified equilibria (dashed)" : "unstable equilibria (dashed)",
                 equilibria, DASHED));
         if (!result.cycles().isEmpty()) {

@@ -56,8 +56,7 @@ final class Charts {
         /** Stable: every eigenvalue has negative real part; non-hyperbolic: some real part is zero. */
         static Stability of(Equilibrium e) {
             var c = e.classification();
-            if (c.stableDimension() + c.unstableDimension() + c.centreDimension() == 0
-                    && e.coordinates().length > 0) {
+            if (!c.classified() && e.coordinates().length > 0) {
                 return UNCLASSIFIED;
             }
             if (c.centreDimension() > 0) {

@@ -64,7 +64,7 @@ public final class BranchFollower {
      * none), and its branch.
      */
     private double hopfSightLostAt = Double.NaN;
-    private int hopfSightLostOn, branchNumber;
+    private int hopfSightLostOn;
     private ContinuationOutcome.Ending ending = ContinuationOutcome.Ending.COMPLETED;
 
     /** A place to start a branch: a point on it, the direction to go, and where it came from. */
@@ -148,8 +148,7 @@ public final class BranchFollower {
     }
 
     private void trace(Seed seed) {
-        int number = branches.size() + 1;
-        branchNumber = number;
+        int number = branches.size() + 1; // the branch is added when it ends
         List<ContinuationPoint> points = new ArrayList<>();
         double[] x = seed.x().clone();
         double[] t = corrector.tangent(x, seed.direction());
@@ -498,7 +497,7 @@ public final class BranchFollower {
         if (finite && re.length > 0 && re.length < n && !(lowest < -tolerance) && Double.isNaN(hopfSightLostAt)
                 && x[n] >= lo && x[n] <= hi) {
             hopfSightLostAt = x[n]; // pairs crossing further down the spectrum are out of the Hopf test's sight
-            hopfSightLostOn = branchNumber;
+            hopfSightLostOn = branches.size() + 1; // the branch being traced
         }
         return new Tests(t[n], corrector.branchTest(x, t), real, frequency, unstableReals,
                 finite && (re.length == n || lowest < -tolerance));

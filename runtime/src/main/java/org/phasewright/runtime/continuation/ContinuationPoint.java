@@ -35,7 +35,6 @@ public record ContinuationPoint(double parameter, double[] state, double[] eigen
      * be classified (no dimensions known).
      */
     public boolean stable() {
-        Classification c = classification;
-        return c.unstableDimension() == 0 && c.stableDimension() + c.centreDimension() > 0;
+        return classification.classified() && classification.unstableDimension() == 0;
     }
 }

@@ -100,12 +100,7 @@ final class Corrector {
             return bordered.determinantTest();
         }
         // singular to working precision: the sign a hair along the branch, so a sign change is not hidden by a 0
-        double[] y = x.clone();
-        double hair = 1e-9 * (1 + Vectors.normInf(x));
-        for (int i = 0; i <= n; i++) {
-            y[i] += hair * t[i];
-        }
-        return bordered.factor(y, t) ? bordered.determinantTest() : 0;
+        return bordered.factor(hairAlong(x, t), t) ? bordered.determinantTest() : 0;
     }
 
     /**
@@ -147,16 +142,8 @@ final class Corrector {
      * at x, a point a hair along t is used. Null when no clearly new direction results.
      */
     private double[] secondTangentByInverseIteration(double[] x, double[] t) {
-        double[] at = x;
-        if (!bordered.factor(at, t)) {
-            at = x.clone();
-            double hair = 1e-9 * (1 + Vectors.normInf(x));
-            for (int i = 0; i <= n; i++) {
-                at[i] += hair * t[i];
-            }
-            if (!bordered.factor(at, t)) {
-                return null;
-            }
+        if (!bordered.factor(x, t) && !bordered.factor(hairAlong(x, t), t)) {
+            return null;
         }
         java.util.SplittableRandom random = new java.util.SplittableRandom(20_011L);
         double[] z = new double[n + 1];
@@ -184,6 +171,16 @@ final class Corrector {
             }
         }
         return z;
+    }
+
+    /** x moved a hair (1e-9 of its size) along t: off a point where the bordered matrix is singular. */
+    private double[] hairAlong(double[] x, double[] t) {
+        double[] y = x.clone();
+        double hair = 1e-9 * (1 + Vectors.normInf(x));
+        for (int i = 0; i <= n; i++) {
+            y[i] += hair * t[i];
+        }
+        return y;
     }
 
     /** The right singular vectors of H_x (padded to square with a zero row) for the smallest singular values. */

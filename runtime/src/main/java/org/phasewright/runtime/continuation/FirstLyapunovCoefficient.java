@@ -1,5 +1,7 @@
 package org.phasewright.runtime.continuation;
 
+import java.util.Arrays;
+
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
 import org.apache.commons.math3.linear.LUDecomposition;
@@ -9,6 +11,7 @@ import org.phasewright.runtime.compile.VectorField;
 import org.phasewright.runtime.linalg.SparseLu;
 import org.phasewright.runtime.linalg.SparseMatrix;
 import org.phasewright.runtime.linalg.SparsePattern;
+import org.phasewright.runtime.linalg.Vectors;
 
 /**
  * The first Lyapunov coefficient l1 at a Hopf point, by the invariant formula of Kuznetsov, Elements of Applied
@@ -185,6 +188,21 @@ public final class FirstLyapunovCoefficient {
         return out;
     }
 
+    /** The real form (re, im) of a complex vector {re, im}, of length 2n. */
+    private static double[] realForm(double[][] b) {
+        int n = b[0].length;
+        double[] x = new double[2 * n];
+        System.arraycopy(b[0], 0, x, 0, n);
+        System.arraycopy(b[1], 0, x, n, n);
+        return x;
+    }
+
+    /** The complex vector {re, im} of a real form (re, im). */
+    private static double[][] complex(double[] x) {
+        int n = x.length / 2;
+        return new double[][] {Arrays.copyOfRange(x, 0, n), Arrays.copyOfRange(x, n, 2 * n)};
+    }
+
     /** The linear algebra l1 needs at one equilibrium u. */
     private interface Operations {
         /** J(v) y, the Jacobian at state v times y. */
@@ -259,7 +277,6 @@ public final class FirstLyapunovCoefficient {
             }
         }
 
-
         @Override
         public double[] solve(double[] b) {
             double[][] m = new double[n][n];
@@ -284,15 +301,11 @@ public final class FirstLyapunovCoefficient {
                 big[i][n + i] = -2 * omega;
                 big[n + i][i] = 2 * omega;
             }
-            double[] rhs = new double[2 * n];
-            System.arraycopy(b[0], 0, rhs, 0, n);
-            System.arraycopy(b[1], 0, rhs, n, n);
             LUDecomposition lu = new LUDecomposition(new Array2DRowRealMatrix(big, false));
             if (!lu.getSolver().isNonSingular()) {
                 return null;
             }
-            double[] w = lu.getSolver().solve(new ArrayRealVector(rhs)).toArray();
-            return new double[][] {java.util.Arrays.copyOfRange(w, 0, n), java.util.Arrays.copyOfRange(w, n, 2 * n)};
+            return complex(lu.getSolver().solve(new ArrayRealVector(realForm(b))).toArray());
         }
     }
 
@@ -327,7 +340,7 @@ public final class FirstLyapunovCoefficient {
         public double[][] kernel(double omega, boolean adjoint) {
             // (M − iwI)(x + iy) = (Mx + wy) + i(My − wx), w = ω for A, −ω for Aᵀ
             double w = adjoint ? -omega : omega;
-            SparseMatrix m = adjoint ? transpose(a) : a;
+            SparseMatrix m = adjoint ? a.transpose() : a;
             SparseMatrix form = complexForm(m, 1, w);
             SparseLu lu = new SparseLu(form.pattern());
             if (!lu.factor(form)) {
@@ -344,11 +357,7 @@ public final class FirstLyapunovCoefficient {
             }
             for (int iteration = 0; iteration < 3; iteration++) {
                 lu.solve(z);
-                double norm = 0;
-                for (double zi : z) {
-                    norm += zi * zi;
-                }
-                norm = Math.sqrt(norm);
+                double norm = Math.sqrt(Vectors.dot(z, z));
                 if (!(norm > 0) || !Double.isFinite(norm)) {
                     return null;
                 }
@@ -356,7 +365,7 @@ public final class FirstLyapunovCoefficient {
                     z[i] /= norm;
                 }
             }
-            return new double[][] {java.util.Arrays.copyOfRange(z, 0, n), java.util.Arrays.copyOfRange(z, n, 2 * n)};
+            return complex(z);
         }
 
         @Override
@@ -378,11 +387,9 @@ public final class FirstLyapunovCoefficient {
             if (!lu.factor(form)) {
                 return null;
             }
-            double[] x = new double[2 * n];
-            System.arraycopy(b[0], 0, x, 0, n);
-            System.arraycopy(b[1], 0, x, n, n);
+            double[] x = realForm(b);
             lu.solve(x);
-            return new double[][] {java.util.Arrays.copyOfRange(x, 0, n), java.util.Arrays.copyOfRange(x, n, 2 * n)};
+            return complex(x);
         }
 
         /** sign · [[M, cI], [−cI, M]] (2n×2n): the real form of sign · (M − icI). */
@@ -413,15 +420,6 @@ public final class FirstLyapunovCoefficient {
             }
             start[2 * n] = next;
             return new SparseMatrix(new SparsePattern(2 * n, start, cols), values);
-        }
-
-        private static SparseMatrix transpose(SparseMatrix m) {
-            SparsePattern.Transposed t = m.pattern().transpose();
-            double[] values = new double[t.slot().length];
-            for (int k = 0; k < values.length; k++) {
-                values[k] = m.values()[t.slot()[k]];
-            }
-            return new SparseMatrix(new SparsePattern(m.dimension(), t.start(), t.rows()), values);
         }
     }
 }

@@ -6,6 +6,14 @@ package org.phasewright.runtime.equilibria;
  */
 public record Classification(String type, int stableDimension, int unstableDimension, int centreDimension) {
 
+    /**
+     * False for an equilibrium that could not be classified ("unclassified", "not classified: ..."): no dimension is
+     * known then.
+     */
+    public boolean classified() {
+        return stableDimension + unstableDimension + centreDimension > 0;
+    }
+
     /** True when no eigenvalue has (numerically) zero real part, so linearisation decides the local picture. */
     public boolean hyperbolic() {
         return centreDimension == 0;

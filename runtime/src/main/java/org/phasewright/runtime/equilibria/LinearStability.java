@@ -58,10 +58,10 @@ public final class LinearStability {
      * and the same classification as a dense one. Any other gets its rightmost eigenvalues from
      * {@link RightmostEigenvalues}: then the unstable dimension is exact when a stable eigenvalue was reached, and a
      * lower bound ("at least") when every eigenvalue found is unstable. Either way only the
-     * {@link RightmostEigenvalues#WANTED} rightmost eigenvalues are kept (unless a variant below asks for all). Zero means below
-     * {@code relativeTolerance} times the Gershgorin bound of J (its largest absolute row sum; the Frobenius norm the
-     * dense case uses grows with the dimension). {@code stop} (a deadline or a cancel) is checked between the
-     * pieces of work; when it fires the equilibrium is left "not classified".
+     * {@link RightmostEigenvalues#WANTED} rightmost eigenvalues are kept (unless the variant below asks for all).
+     * Zero means below {@code relativeTolerance} times the Gershgorin bound of J (its largest absolute row sum; the
+     * Frobenius norm the dense case uses grows with the dimension). {@code stop} (a deadline or a cancel) is checked
+     * between the pieces of work; when it fires the equilibrium is left "not classified".
      */
     public static LinearStability ofSparse(SparseMatrix j, double relativeTolerance, BooleanSupplier stop) {
         return ofSparse(j, relativeTolerance, stop, null, false);

@@ -24,8 +24,8 @@ public final class BlockCirculantSpectrum {
 
     /**
      * {re, im} of all eigenvalues of j, or null when j is not block circulant for any m up to
-     * {@link #MAX_COMPONENTS} with at least 3 cells (or a block's eigen-solver fails, or {@code stop} fires). Entries of different cells count as equal within
-     * {@code tolerance} (absolute).
+     * {@link #MAX_COMPONENTS} with at least 3 cells (or a block's eigen-solver fails, or {@code stop} fires).
+     * Entries of different cells count as equal within {@code tolerance} (absolute).
      */
     public static double[][] of(SparseMatrix j, double tolerance, java.util.function.BooleanSupplier stop) {
         if (!j.allFinite()) {

@@ -288,9 +288,10 @@ public final class RightmostEigenvalues {
         }
 
         /**
-         * Removes from x its components along v[0..count) by classical Gram–Schmidt applied twice (enough for
-         * orthogonality to working precision, Giraud et al., Numer. Math. 101, 2005); the coefficients go to
-         * {@link #coefficients}. Returns |x| afterwards.
+         * Removes from x its components along v[0..count) by Gram–Schmidt applied twice, each projection taken from
+         * the x already reduced (the modified form); twice is enough for orthogonality to working precision (Giraud
+         * et al., Numer. Math. 101, 2005, for the classical form). The coefficients go to {@link #coefficients}.
+         * Returns |x| afterwards.
          */
         private double orthogonalise(double[] x, int count) {
             Arrays.fill(coefficients, 0.0);

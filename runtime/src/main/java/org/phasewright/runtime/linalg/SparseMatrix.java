@@ -85,6 +85,16 @@ public final class SparseMatrix {
         return worst;
     }
 
+    /** The transpose, on the transposed pattern. */
+    public SparseMatrix transpose() {
+        SparsePattern.Transposed t = pattern.transpose();
+        double[] values = new double[t.slot().length];
+        for (int k = 0; k < values.length; k++) {
+            values[k] = this.values[t.slot()[k]];
+        }
+        return new SparseMatrix(new SparsePattern(pattern.dimension(), t.start(), t.rows()), values);
+    }
+
     public boolean allFinite() {
         return Vectors.allFinite(values);
     }

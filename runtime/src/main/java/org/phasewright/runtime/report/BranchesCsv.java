@@ -37,8 +37,7 @@ public final class BranchesCsv {
                     }
                     row.add(Boolean.toString(p.stable()));
                     var c = p.classification(); // empty when the point could not be classified
-                    boolean known = c.stableDimension() + c.unstableDimension() + c.centreDimension() > 0;
-                    row.add(known ? Integer.toString(c.unstableDimension()) : "");
+                    row.add(c.classified() ? Integer.toString(c.unstableDimension()) : "");
                     row.add(p.classification().type());
                     row.add(p.special() == null ? "" : p.special().word());
                     Csv.row(out, row);

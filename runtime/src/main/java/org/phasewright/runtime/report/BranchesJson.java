@@ -62,8 +62,8 @@ public final class BranchesJson {
                 out.append(k > 0 ? "," : "").append("\n        {\"parameter\": ").append(Json.number(p.parameter()))
                         .append(", \"state\": ").append(numbers(p.state()))
                         .append(", \"stable\": ").append(p.stable())
-                        .append(", \"unstableDimension\": ").append(known(p) // null: not classified
-                                ? Integer.toString(p.classification().unstableDimension()) : "null")
+                        .append(", \"unstableDimension\": ").append(p.classification().classified()
+                                ? Integer.toString(p.classification().unstableDimension()) : "null") // unknown
                         .append(", \"type\": ").append(Json.string(p.classification().type()))
                         .append(", \"eigenvalues\": [");
                 double[] re = p.eigenvaluesReal(), im = p.eigenvaluesImag();
@@ -86,10 +86,5 @@ public final class BranchesJson {
             out.append(i > 0 ? ", " : "").append(Json.number(values[i]));
         }
         return out.append(']').toString();
-    }
-
-    private static boolean known(ContinuationPoint p) {
-        var c = p.classification();
-        return c.stableDimension() + c.unstableDimension() + c.centreDimension() > 0;
     }
 }

@@ -60,7 +60,8 @@ class LargeModelStudiesTest {
         assertEquals(rightmost, uniform.eigenvaluesReal()[0], 1e-9);
         // a large model's rows keep 16 states with their mean and rms (every coordinate goes to
         // equilibria-states.csv) and its 12 rightmost eigenvalues, and every row is as wide as the header (RFC 4180)
-        String[] lines = org.phasewright.runtime.report.EquilibriaCsv.render(result.stateNames(), search).split("\r?\n");
+        String[] lines = org.phasewright.runtime.report.EquilibriaCsv.render(result.stateNames(), search)
+                .split("\r?\n");
         assertEquals(1 + 16 + 2 + 4 + 2 * 12, lines[0].split(",", -1).length);
         assertTrue(lines[0].contains("lambda12_im") && !lines[0].contains("lambda13"), lines[0]);
         for (int k = 1; k < lines.length; k++) {
